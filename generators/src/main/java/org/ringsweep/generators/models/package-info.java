@@ -1,0 +1,6 @@
+/**
+ * The built-in driver and receiver models.
+ *
+ * <p>Tier: internal.
+ */
+package org.ringsweep.generators.models;
