@@ -33,8 +33,8 @@ public final class EngineSelector {
             case AUTO:
             default:
                 return NgspiceEngine.locate(env).orElseThrow(() ->
-                        new EngineNotFoundException("no simulation engine: ngspice not found ("
-                                + NgspiceEngine.whyNotFound(env) + ") and " + BUILTIN_MISSING));
+                        new EngineNotFoundException("no simulation engine found: " + NgspiceEngine.whyNotFound(env)
+                                + " (the built-in engine is not available in this version)"));
         }
     }
 

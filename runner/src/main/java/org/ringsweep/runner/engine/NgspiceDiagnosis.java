@@ -43,8 +43,8 @@ final class NgspiceDiagnosis {
             new Signature("Error", FailureKind.CRASH, "ngspice reported an error"));
 
     private static final Pattern LINE_NUMBER = Pattern.compile("Error on line (\\d+)");
-    private static final Pattern TRAN_TROUBLE = Pattern.compile(
-            "Timestep too small; time = ([-+0-9.eE]+).*?trouble with (.+?)\\s*$");
+    private static final Pattern TRAN_TIME = Pattern.compile("Timestep too small; time = ([-+0-9.eE]*[0-9])");
+    private static final Pattern TROUBLE = Pattern.compile("trouble with (.+?)\\s*$");
     /** Progress and stepping chatter that ngspice prints without line breaks in front of real messages. */
     private static final Pattern CHATTER = Pattern.compile(
             "Reference value\\s*:\\s*\\S+|Trying gmin\\s*=\\s*\\S+|Supplies reduced to\\s*\\S+%");
@@ -58,14 +58,15 @@ final class NgspiceDiagnosis {
      * that show it.
      *
      * @param stderr the run's standard error text
+     * @param deck   the deck's path or name, for messages
      * @return the finding, or empty when no signature occurs
      */
-    static Optional<Finding> diagnose(String stderr) {
+    static Optional<Finding> diagnose(String stderr, String deck) {
         List<String> lines = lines(stderr);
         for (Signature s : SIGNATURES) {
             for (String line : lines) {
                 if (line.contains(s.needle())) {
-                    String detail = detail(s.kind(), lines);
+                    String detail = detail(s.kind(), lines, deck);
                     String meaning = detail.isEmpty() ? s.meaning() : s.meaning() + " (" + detail + ")";
                     return Optional.of(new Finding(s.kind(), meaning + ": " + quote(lines)));
                 }
@@ -102,14 +103,16 @@ final class NgspiceDiagnosis {
         return shorten(String.join(" | ", picked));
     }
 
-    private static String detail(FailureKind kind, List<String> lines) {
+    private static String detail(FailureKind kind, List<String> lines, String deck) {
         for (String line : lines) {
             Matcher m;
             if (kind == FailureKind.SYNTAX && (m = LINE_NUMBER.matcher(line)).find()) {
-                return "line " + m.group(1) + " of the deck";
+                return "line " + m.group(1) + " of `" + deck + "`";
             }
-            if (kind == FailureKind.CONVERGENCE && (m = TRAN_TROUBLE.matcher(line)).find()) {
-                return "Timestep too small at t = " + m.group(1) + " s near " + m.group(2).replace("\"", "");
+            if (kind == FailureKind.CONVERGENCE && (m = TRAN_TIME.matcher(line)).find()) {
+                Matcher where = TROUBLE.matcher(line);
+                return "Timestep too small at t = " + m.group(1) + " s"
+                        + (where.find() ? " near " + where.group(1).replace("\"", "") : "");
             }
             if (kind == FailureKind.CONVERGENCE && line.contains("Transient op failed")) {
                 return "no DC operating point at the start of the transient";

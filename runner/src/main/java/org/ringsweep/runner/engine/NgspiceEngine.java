@@ -236,7 +236,7 @@ public final class NgspiceEngine implements SimulationEngine {
     }
 
     private static SimulationOutcome classify(SimulationJob job, int exit, String stderr, String log, Duration elapsed) {
-        Optional<NgspiceDiagnosis.Finding> finding = NgspiceDiagnosis.diagnose(stderr);
+        Optional<NgspiceDiagnosis.Finding> finding = NgspiceDiagnosis.diagnose(stderr, job.deckFile().toString());
         if (finding.isPresent()) {
             return failure(finding.get().kind(), finding.get().message(), log, elapsed);
         }

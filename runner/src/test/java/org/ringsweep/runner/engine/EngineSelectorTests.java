@@ -1,0 +1,54 @@
+package org.ringsweep.runner.engine;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.ringsweep.runner.testing.Ngspice;
+
+class EngineSelectorTests {
+
+    @Test
+    void builtinIsNotAvailableYetAndSaysHowToGetAnEngine() {
+        EngineNotFoundException e = assertThrows(EngineNotFoundException.class,
+                () -> EngineSelector.select("builtin", Map.of()));
+        assertEquals("the built-in engine is not available in this version; install ngspice (apt-get install ngspice)"
+                + " or set RINGSWEEP_NGSPICE", e.getMessage());
+        assertEquals(FailureKind.ENGINE_NOT_FOUND, e.asFailure().kind());
+    }
+
+    @Test
+    void autoWithoutNgspiceExplainsBothEngines() {
+        EngineNotFoundException e = assertThrows(EngineNotFoundException.class,
+                () -> EngineSelector.select(EngineChoice.AUTO, Map.of("PATH", "/nonexistent")));
+        assertTrue(e.getMessage().contains("apt-get install ngspice"), e.getMessage());
+        assertTrue(e.getMessage().contains("built-in engine is not available"), e.getMessage());
+    }
+
+    @Test
+    void binaryVariableNamingNoFileIsReportedByName() {
+        Map<String, String> env = Map.of(NgspiceEngine.BINARY_VARIABLE, "/nonexistent/ngspice", "PATH", "/usr/bin:/bin");
+        assertTrue(NgspiceEngine.locate(env).isEmpty());
+        EngineNotFoundException e = assertThrows(EngineNotFoundException.class,
+                () -> EngineSelector.select(EngineChoice.NGSPICE, env));
+        assertTrue(e.getMessage().contains("RINGSWEEP_NGSPICE names `/nonexistent/ngspice`"), e.getMessage());
+    }
+
+    @Test
+    void autoAndNgspiceFindNgspiceOnThePath() {
+        Path binary = Ngspice.require();
+        Map<String, String> env = Map.of("PATH", binary.getParent().toString());
+        assertEquals("ngspice", EngineSelector.select("auto", env).name());
+        assertEquals("ngspice", EngineSelector.select("NGSPICE", env).name());
+    }
+
+    @Test
+    void unknownChoiceNamesTheAcceptedOnes() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> EngineChoice.parse("spice3"));
+        assertEquals("unknown engine `spice3`; expected `auto`, `ngspice` or `builtin`", e.getMessage());
+        assertEquals("builtin", EngineChoice.BUILTIN.toString());
+    }
+}
