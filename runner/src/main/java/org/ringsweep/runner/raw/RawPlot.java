@@ -35,4 +35,14 @@ public record RawPlot(String title, String plotName, String flags, List<String> 
         }
         return java.util.Optional.empty();
     }
+
+    /** Whether {@code Flags:} says {@code complex} (the columns then hold the real parts). */
+    public boolean isComplex() {
+        for (String token : flags.strip().split("[ \t]+")) {
+            if (token.equalsIgnoreCase("complex")) {
+                return true;
+            }
+        }
+        return false;
+    }
 }
