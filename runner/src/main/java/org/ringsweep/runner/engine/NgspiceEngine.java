@@ -124,22 +124,32 @@ public final class NgspiceEngine implements SimulationEngine {
 
     /** The version from the {@code ngspice -v} banner ({@code ** ngspice-39 : …} → {@code 39}), or {@code unknown}. */
     private static String readVersion(Path binary) {
+        Process p = null;
         try {
             Path dir = Path.of(System.getProperty("java.io.tmpdir"));
-            Process p = new ProcessBuilder(binary.toString(), "-n", "-v")
-                    .directory(dir.toFile()).redirectErrorStream(true).start();
+            Optional<Process> started = ProcessTrees.start(new ProcessBuilder(binary.toString(), "-n", "-v")
+                    .directory(dir.toFile()).redirectErrorStream(true));
+            if (started.isEmpty()) {
+                return "unknown";
+            }
+            p = started.get();
             p.getOutputStream().close();
             // The banner is a few hundred bytes: it fits the pipe, so waiting before reading cannot block.
             if (!p.waitFor(VERSION_TIMEOUT.toMillis(), TimeUnit.MILLISECONDS)) {
                 ProcessTrees.kill(p);
                 return "unknown";
             }
+            ProcessTrees.release(p);
             try (InputStream in = p.getInputStream()) {
                 return parseVersion(new String(in.readNBytes(64 * 1024), StandardCharsets.UTF_8));
             }
         } catch (IOException e) {
+            if (p != null) {
+                ProcessTrees.kill(p);
+            }
             return "unknown";
         } catch (InterruptedException e) {
+            ProcessTrees.kill(p);
             Thread.currentThread().interrupt();
             return "unknown";
         }
@@ -189,12 +199,15 @@ public final class NgspiceEngine implements SimulationEngine {
         long start = System.nanoTime();
         Process process;
         try {
-            process = builder.start();
+            Optional<Process> started = ProcessTrees.start(builder);
+            if (started.isEmpty()) {
+                return failure(FailureKind.TIMEOUT, "the program is stopping; ngspice was not started", "", Duration.ZERO);
+            }
+            process = started.get();
         } catch (IOException e) {
             return failure(FailureKind.ENGINE_NOT_FOUND, "could not start ngspice `" + binary + "`: " + e.getMessage(),
                     "", Duration.ZERO);
         }
-        ProcessTrees.track(process);
         boolean finished = false;
         boolean interrupted = false;
         try {
@@ -242,7 +255,7 @@ public final class NgspiceEngine implements SimulationEngine {
         }
         if (exit == 3) {
             return failure(FailureKind.TRUNCATED_OUTPUT, "the deck's own end-time check stopped ngspice (exit status 3):"
-                    + " the transient ended before its stop time of " + job.stopTime() + " s", log, elapsed);
+                    + " the transient ended before its stop time of " + number(job.stopTime()) + " s", log, elapsed);
         }
         if (exit == 124 || exit == 137 || exit == 143) {
             return failure(FailureKind.TIMEOUT, "ngspice was stopped from outside (exit status " + exit + ")"
@@ -305,8 +318,8 @@ public final class NgspiceEngine implements SimulationEngine {
         double[] t = time.get();
         double end = t[t.length - 1];
         if (end < job.stopTime() * (1 - END_TIME_TOLERANCE)) {
-            return failure(FailureKind.TRUNCATED_OUTPUT, "the transient ends at t = " + end + " s, before its stop time "
-                    + job.stopTime() + " s", log, elapsed);
+            return failure(FailureKind.TRUNCATED_OUTPUT, "the transient ends at t = " + number(end) + " s, before its stop time "
+                    + number(job.stopTime()) + " s", log, elapsed);
         }
         Map<String, double[]> signals = signals(plot, job.probes());
         for (Map.Entry<String, double[]> e : signals.entrySet()) {
@@ -314,7 +327,7 @@ public final class NgspiceEngine implements SimulationEngine {
             for (int i = 0; i < v.length; i++) {
                 if (!Double.isFinite(v[i])) {
                     return failure(FailureKind.CONVERGENCE, "the solution is not finite: `" + e.getKey() + "` is "
-                            + v[i] + " at t = " + t[i] + " s", log, elapsed);
+                            + v[i] + " at t = " + number(t[i]) + " s", log, elapsed);
                 }
             }
         }
@@ -398,6 +411,17 @@ public final class NgspiceEngine implements SimulationEngine {
         String s = text.strip();
         return s.length() <= LOG_EXCERPT ? s : s.substring(0, LOG_EXCERPT) + "\n[… " + (s.length() - LOG_EXCERPT)
                 + " more characters in the log file]";
+    }
+
+    /** A number as a person reads it: six significant digits, no trailing zeros ({@code 3e-06}, {@code 2.5e-09}). */
+    static String number(double x) {
+        String s = String.format(Locale.ROOT, "%.6g", x);
+        int e = s.indexOf('e');
+        String mantissa = e < 0 ? s : s.substring(0, e);
+        if (mantissa.contains(".")) {
+            mantissa = mantissa.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+        return e < 0 ? mantissa : mantissa + s.substring(e);
     }
 
     private static String seconds(Duration d) {

@@ -1,10 +1,14 @@
 package org.ringsweep.runner.engine;
 
+import java.io.IOException;
 import java.time.Duration;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.TimeUnit;
+import java.util.concurrent.locks.ReadWriteLock;
+import java.util.concurrent.locks.ReentrantReadWriteLock;
 import java.util.stream.Collectors;
 
 /**
@@ -17,6 +21,9 @@ final class ProcessTrees {
     static final Duration GRACE = Duration.ofMillis(500);
 
     private static final Set<Process> RUNNING = ConcurrentHashMap.newKeySet();
+    /** Starting and tracking happen under the read lock, so the hook (write lock) never misses a process. */
+    private static final ReadWriteLock LOCK = new ReentrantReadWriteLock();
+    private static volatile boolean stopping;
 
     static {
         try {
@@ -29,9 +36,25 @@ final class ProcessTrees {
     private ProcessTrees() {
     }
 
-    /** Starts tracking a process until {@link #release} or {@link #kill}. */
-    static void track(Process process) {
-        RUNNING.add(process);
+    /**
+     * Starts a process and tracks it until {@link #release} or {@link #kill}; a shutdown that
+     * begins meanwhile waits for this to finish and then kills it too.
+     *
+     * @return the process, or empty when the JVM is already shutting down (nothing was started)
+     * @throws IOException when the program cannot be started
+     */
+    static Optional<Process> start(ProcessBuilder builder) throws IOException {
+        LOCK.readLock().lock();
+        try {
+            if (stopping) {
+                return Optional.empty();
+            }
+            Process process = builder.start();
+            RUNNING.add(process);
+            return Optional.of(process);
+        } finally {
+            LOCK.readLock().unlock();
+        }
     }
 
     /** Stops tracking a process that has ended by itself. */
@@ -69,9 +92,15 @@ final class ProcessTrees {
     }
 
     private static void killAll() {
-        for (Process p : List.copyOf(RUNNING)) {
-            p.descendants().forEach(ProcessHandle::destroyForcibly);
-            p.destroyForcibly();
+        LOCK.writeLock().lock();
+        try {
+            stopping = true;
+            for (Process p : List.copyOf(RUNNING)) {
+                p.descendants().forEach(ProcessHandle::destroyForcibly);
+                p.destroyForcibly();
+            }
+        } finally {
+            LOCK.writeLock().unlock();
         }
     }
 }

@@ -203,6 +203,7 @@ class NgspiceEngineTests {
         String deck = deck("v(a)", "V1 in 0 1", "R1 in a 1k", "C1 a 0 1p", ".tran 1n 10n");
         SimulationOutcome.Failure f = failed(engine().run(job(out, deck, 20e-9, Map.of("a", "a"))));
         assertEquals(FailureKind.TRUNCATED_OUTPUT, f.kind(), f.message());
+        assertTrue(f.message().endsWith("before its stop time 2e-08 s"), f.message());
     }
 
     @Test

@@ -36,9 +36,13 @@ class ProcessHandlingTests {
     }
 
     SimulationOutcome.Failure run(Path binary, Duration timeout) {
+        return run(NgspiceEngine.at(binary), timeout);
+    }
+
+    SimulationOutcome.Failure run(NgspiceEngine engine, Duration timeout) {
         SimulationJob job = new SimulationJob("* fake\n.end\n", tmp.resolve("work"), "point.cir", "out.raw", 1e-9,
                 timeout, Map.of("a", "a"));
-        SimulationOutcome o = NgspiceEngine.at(binary).run(job);
+        SimulationOutcome o = engine.run(job);
         return assertInstanceOf(SimulationOutcome.Failure.class, o, o::toString);
     }
 
@@ -95,10 +99,10 @@ class ProcessHandlingTests {
 
     @Test
     void interruptedRunStopsNgspiceAndKeepsTheInterrupt() throws IOException {
-        Path bin = fakeNgspice("sleep 300");
+        NgspiceEngine engine = NgspiceEngine.at(fakeNgspice("sleep 300"));
         Thread.currentThread().interrupt();
         try {
-            SimulationOutcome.Failure f = run(bin, Duration.ofSeconds(30));
+            SimulationOutcome.Failure f = run(engine, Duration.ofSeconds(30));
             assertEquals(FailureKind.TIMEOUT, f.kind());
             assertTrue(f.message().contains("interrupted"), f.message());
             assertTrue(Thread.currentThread().isInterrupted());
