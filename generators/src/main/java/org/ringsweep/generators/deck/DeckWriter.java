@@ -208,7 +208,7 @@ public final class DeckWriter {
             gv[0] = ohms[0];
             System.arraycopy(t, 0, gt, 1, t.length);
             System.arraycopy(ohms, 0, gv, 1, t.length);
-            gt[gt.length - 1] = Math.max(t[t.length - 1], stop) * 2 + 1;
+            gt[gt.length - 1] = Math.max(t[t.length - 1], stop) + 1;
             gv[gv.length - 1] = ohms[ohms.length - 1];
             e.put("points", points(gt, gv));
         } else if (p instanceof Primitive.LosslessLine t) {
