@@ -415,7 +415,7 @@ public final class Elaborator {
             Path best = new Path(0, 0, 0);
             Deque<Frame> stack = new ArrayDeque<>();
             Set<NetPoint> onPath = new HashSet<>();
-            stack.push(new Frame(start, 0, 0, 0, null));
+            stack.push(new Frame(start, 0, 0, 0));
             int steps = 0;
             // Iterative depth-first search over simple paths; nets are small, the limit guards meshes.
             while (!stack.isEmpty()) {
@@ -449,7 +449,7 @@ public final class Elaborator {
                 } else if (e instanceof Part p && p.kind() == Part.Kind.RESISTOR) {
                     series += partValue(p);
                 }
-                stack.push(new Frame(other, delay, series, z0, null));
+                stack.push(new Frame(other, delay, series, z0));
             }
             if (steps > PATH_SEARCH_LIMIT) {
                 double total = net.segments().stream().mapToDouble(this::segmentDelay).sum();
@@ -658,12 +658,11 @@ public final class Elaborator {
         List<Element> edges;
         int next;
 
-        Frame(NetPoint point, double delay, double seriesOhms, double firstZ0, List<Element> edges) {
+        Frame(NetPoint point, double delay, double seriesOhms, double firstZ0) {
             this.point = point;
             this.delay = delay;
             this.seriesOhms = seriesOhms;
             this.firstZ0 = firstZ0;
-            this.edges = edges;
         }
     }
 }

@@ -114,6 +114,37 @@ class DeckWriterTests {
     }
 
     @Test
+    void lineWithSeriesAndShuntLossUsesTheFullRlgcModelAndRuns(@TempDir Path dir) throws Exception {
+        // ngspice.md §4: LTRA rejects R and G both non-zero, TXL takes them
+        Net net = new NetBuilder("rlgc").driver(ramp("U1.1", "v_high", 3.3, "rise", 1e-9, "r_out", 20.0))
+                .receiver(cmos("U2.1", "c_in", 1e-12, "vih", 2.0, "vil", 0.8))
+                .segment(segment("TL1", "U1.1", "U2.1", "z0", 50.0, "delay", 0.5e-9, "length", 0.1, "r_per_m", 5.0, "g_per_m", 1e-3))
+                .build();
+        String deck = WRITER.render(new Elaborator().elaborate(net, "typ").circuit(), DeckOptions.of("y.raw"));
+        assertTrue(deck.contains("\nYtl1 u1_1 0 u2_1 0 mtl1\n"), deck);
+        assertTrue(deck.contains("\n.model mtl1 TXL R=5e+00 L=2.5e-07 G=1e-03 C=1e-10 length=1e-01\n"), deck);
+        NgspiceCheck.assertRuns(deck, "y.raw", dir);
+    }
+
+    @Test
+    void oneWriterRendersTheSameDeckFromManyThreads() throws Exception {
+        Circuit c = new Elaborator().elaborate(TestNets.formatsExample().build(), "typ").circuit();
+        String expected = WRITER.render(c, DeckOptions.of("x.raw"));
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(4);
+        try {
+            List<java.util.concurrent.Future<String>> decks = new java.util.ArrayList<>();
+            for (int i = 0; i < 16; i++) {
+                decks.add(pool.submit(() -> WRITER.render(c, DeckOptions.of("x.raw"))));
+            }
+            for (java.util.concurrent.Future<String> d : decks) {
+                assertEquals(expected, d.get());
+            }
+        } finally {
+            pool.shutdown();
+        }
+    }
+
+    @Test
     void renderingTwiceGivesIdenticalDecks() {
         Net net = TestNets.formatsExample().build();
         String a = WRITER.render(new Elaborator().elaborate(net, "typ").circuit(), DeckOptions.of("x.raw"));
