@@ -176,6 +176,84 @@ public sealed interface Primitive {
     }
 
     /**
+     * A resistor whose value follows a piecewise-linear function of time: linear between the
+     * breakpoints, held at the first value before the first time and at the last value after the
+     * last time. A driver whose pull-up and pull-down resistances differ uses it to change its
+     * output resistance with the driven state. ngspice has no such element; the deck writer
+     * renders it as a behavioural current {@code v(a,b)/R(time)}.
+     *
+     * @param name  element name
+     * @param a     first node
+     * @param b     second node
+     * @param times breakpoint times (s), strictly increasing, first ≥ 0
+     * @param ohms  resistance at each time (ohm), each positive and finite
+     */
+    record TimedResistor(String name, String a, String b, double[] times, double[] ohms) implements Primitive {
+        /** Validates and copies the arrays. */
+        public TimedResistor {
+            Checks.names(name, a, b);
+            if (times.length == 0 || times.length != ohms.length) {
+                throw new IllegalArgumentException("timed resistor " + name + " needs equal, non-empty time and resistance lists");
+            }
+            times = times.clone();
+            ohms = ohms.clone();
+            for (int i = 0; i < times.length; i++) {
+                Checks.finite(times[i], "time of timed resistor " + name);
+                Checks.positive(ohms[i], "resistance of timed resistor " + name);
+                if (i == 0 ? times[0] < 0 : times[i] <= times[i - 1]) {
+                    throw new IllegalArgumentException("times of timed resistor " + name + " must start at ≥ 0 and increase strictly");
+                }
+            }
+        }
+
+        /** A copy of the breakpoint times. */
+        @Override
+        public double[] times() {
+            return times.clone();
+        }
+
+        /** A copy of the breakpoint resistances. */
+        @Override
+        public double[] ohms() {
+            return ohms.clone();
+        }
+
+        /** The resistance at time {@code t} (ohm; linear between points, held outside). */
+        public double ohmsAt(double t) {
+            if (t <= times[0]) {
+                return ohms[0];
+            }
+            for (int i = 1; i < times.length; i++) {
+                if (t <= times[i]) {
+                    return ohms[i - 1] + (ohms[i] - ohms[i - 1]) * (t - times[i - 1]) / (times[i] - times[i - 1]);
+                }
+            }
+            return ohms[ohms.length - 1];
+        }
+
+        @Override
+        public List<String> nodes() {
+            return List.of(a, b);
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof TimedResistor r && r.name.equals(name) && r.a.equals(a) && r.b.equals(b)
+                    && Arrays.equals(r.times, times) && Arrays.equals(r.ohms, ohms);
+        }
+
+        @Override
+        public int hashCode() {
+            return name.hashCode() * 31 + Arrays.hashCode(times) * 17 + Arrays.hashCode(ohms);
+        }
+
+        @Override
+        public String toString() {
+            return "TimedResistor[" + name + ", " + a + ", " + b + ", t=" + Arrays.toString(times) + ", ohm=" + Arrays.toString(ohms) + "]";
+        }
+    }
+
+    /**
      * A lossless transmission line (telegrapher's equations with R = G = 0).
      *
      * @param name  element name

@@ -1,7 +1,9 @@
 /**
  * Descriptions of driver and receiver models: their ids and parameters with units and defaults,
- * so that input files can be checked before anything is simulated. The elaboration half of the
- * plugin SPI lives beside it once it is stable.
+ * so that input files can be checked before anything is simulated, and the elaboration half of
+ * the plugin SPI: {@link org.ringsweep.api.model.DriverModel} and
+ * {@link org.ringsweep.api.model.ReceiverModel} turn a driver or receiver into circuit primitives
+ * through a narrow {@link org.ringsweep.api.model.ElaborationContext}.
  *
  * <p>Tier: public, for plugin authors; EXPERIMENTAL.
  */
