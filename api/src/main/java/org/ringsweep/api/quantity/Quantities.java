@@ -120,7 +120,7 @@ public final class Quantities {
     public static double parse(String text, Dimension expected) {
         String t = text == null ? "" : text.strip();
         if (t.isEmpty()) {
-            throw failure(expected, t, "nothing");
+            throw new QuantityFormatException("expected " + describe(expected) + ", found nothing");
         }
         if (isNonFinite(t)) {
             throw failure(expected, t, "not a finite number");

@@ -123,6 +123,12 @@ class QuantitiesTests {
     }
 
     @Test
+    void saysNothingWasFoundForEmptyText() {
+        QuantityFormatException e = assertThrows(QuantityFormatException.class, () -> Quantities.parse(" ", Dimension.LENGTH));
+        assertEquals("expected a length such as `45mm`, `500mil` or `0.045`, found nothing", e.getMessage());
+    }
+
+    @Test
     void rejectsNumbersBeyondTheDoubleRange() {
         assertThrows(QuantityFormatException.class, () -> Quantities.parse("1e400", Dimension.TIME));
     }

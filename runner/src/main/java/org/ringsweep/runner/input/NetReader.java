@@ -443,7 +443,12 @@ final class NetReader {
     }
 
     private String point(YamlMap m, String key) {
-        return name(m, key, POINT);
+        String p = name(m, key, POINT);
+        if (rails.contains(p)) {
+            throw new InputException(YamlMap.location(file, m.get(key).orElseThrow()), m.path(key), "`" + p
+                    + "` is a rail; expected a pin or junction (drivers, receivers and segment ends sit on the net, not on a rail)");
+        }
+        return p;
     }
 
     private String name(YamlMap m, String key, String what) {
@@ -484,7 +489,10 @@ final class NetReader {
             }
             Origin first = before.getValue();
             String detail;
-            if (e instanceof Driver && before.getKey() instanceof Driver) {
+            if (e instanceof Receiver && before.getKey() instanceof Driver) {
+                detail = "pin " + e.id() + " has a driver (" + first.path() + " at line " + first.id().line()
+                        + ") and a receiver; expected a receiver on another pin (a driver's own load belongs to its model)";
+            } else if (e instanceof Driver && before.getKey() instanceof Driver) {
                 detail = "two drivers on pin " + e.id() + " (the other is " + first.path() + " at line " + first.id().line()
                         + "); expected one driver per pin";
             } else {
