@@ -1,8 +1,10 @@
 package org.ringsweep.runner.input;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -13,6 +15,7 @@ import org.ringsweep.api.model.ModelCatalog;
 import org.ringsweep.api.model.ModelDescriptor;
 import org.ringsweep.api.model.ParameterSpec;
 import org.ringsweep.api.net.Driver;
+import org.ringsweep.api.net.Element;
 import org.ringsweep.api.net.LimitName;
 import org.ringsweep.api.net.Limits;
 import org.ringsweep.api.net.Location;
@@ -24,6 +27,7 @@ import org.ringsweep.api.net.Parameters;
 import org.ringsweep.api.net.Part;
 import org.ringsweep.api.net.Point;
 import org.ringsweep.api.net.Receiver;
+import org.ringsweep.api.net.Segment;
 import org.ringsweep.api.net.SimulationSettings;
 import org.ringsweep.api.net.Stimulus;
 import org.ringsweep.api.net.Value;
@@ -56,8 +60,8 @@ final class NetReader {
     private final ModelCatalog catalog;
     private final Set<String> rails = new LinkedHashSet<>(List.of(NetPoint.GROUND));
     private final Map<Location, Origin> originsByLocation = new HashMap<>();
-    private final List<Map.Entry<Object, Origin>> elementsInOrder = new ArrayList<>();
-    private final Map<Part, List<Node>> partTerminals = new java.util.IdentityHashMap<>();
+    private final List<Map.Entry<Element, Origin>> elementsInOrder = new ArrayList<>();
+    private final Map<Part, List<Node>> partTerminals = new IdentityHashMap<>();
 
     NetReader(String file, String hash, ModelCatalog catalog) {
         this.file = file;
@@ -225,7 +229,7 @@ final class NetReader {
         };
     }
 
-    private org.ringsweep.api.net.Segment readSegment(Node n, int index) {
+    private Segment readSegment(Node n, int index) {
         String path = "segments[" + index + "]";
         YamlMap m = YamlMap.of(file, n, path, "a segment such as `{ from: U1.14, to: J1, z0: 50, length: 4mm, er_eff: 3.4 }`");
         if (m.has("geometry")) {
@@ -250,7 +254,7 @@ final class NetReader {
             locations.put(key, at);
         }
         checkSegmentTiming(m, values.keySet());
-        org.ringsweep.api.net.Segment s = new org.ringsweep.api.net.Segment(id, from, to, Parameters.of(values, locations), m.location());
+        Segment s = new Segment(id, from, to, Parameters.of(values, locations), m.location());
         remember(s, m, m.has("id") ? "id" : null);
         if (from.equals(to)) {
             throw new InputException(YamlMap.location(file, m.get("to").orElseThrow()), m.path("to"),
@@ -290,7 +294,7 @@ final class NetReader {
         m.allowOnly(PART_KEYS, "a part");
         String ref = name(m, "ref", "a reference designator such as `R5`");
         String kindText = m.text("kind", "one of `capacitor`, `inductor`, `resistor`");
-        Part.Kind kind = java.util.Arrays.stream(Part.Kind.values()).filter(k -> k.word().equals(kindText)).findFirst()
+        Part.Kind kind = Arrays.stream(Part.Kind.values()).filter(k -> k.word().equals(kindText)).findFirst()
                 .orElseThrow(() -> new InputException(YamlMap.location(file, m.get("kind").orElseThrow()), m.path("kind"),
                         "expected one of `capacitor`, `inductor`, `resistor`, found `" + kindText + "`"));
         Node valueNode = m.require("value", "the part's value such as `value: 22`");
@@ -389,7 +393,7 @@ final class NetReader {
 
     private Limits readLimits(Node n, String path) {
         YamlMap m = YamlMap.of(file, n, path, "a map of limits such as `{ overshoot_max: 0.5V, settle_max: 10ns }`");
-        List<String> keys = java.util.Arrays.stream(LimitName.values()).map(LimitName::key).toList();
+        List<String> keys = Arrays.stream(LimitName.values()).map(LimitName::key).toList();
         m.allowOnly(keys, "limits");
         Map<LimitName, Value> values = new EnumMap<>(LimitName.class);
         for (String key : m.keys()) {
@@ -470,7 +474,7 @@ final class NetReader {
         }
     }
 
-    private void remember(org.ringsweep.api.net.Element e, YamlMap m, String idKey) {
+    private void remember(Element e, YamlMap m, String idKey) {
         Origin o = new Origin(m.path(), m.location(), idKey == null ? m.path() : m.path(idKey),
                 idKey == null ? m.location() : YamlMap.location(file, m.get(idKey).orElseThrow()));
         originsByLocation.put(e.location(), o);
@@ -479,11 +483,11 @@ final class NetReader {
 
     /** Duplicate ids and dangling part terminals, named by key path (NetBuilder would name them by id). */
     private void checkAcrossElements() {
-        Map<String, Map.Entry<Object, Origin>> seen = new HashMap<>();
-        for (Map.Entry<Object, Origin> entry : elementsInOrder) {
-            org.ringsweep.api.net.Element e = (org.ringsweep.api.net.Element) entry.getKey();
+        Map<String, Map.Entry<Element, Origin>> seen = new HashMap<>();
+        for (Map.Entry<Element, Origin> entry : elementsInOrder) {
+            Element e = entry.getKey();
             Origin o = entry.getValue();
-            Map.Entry<Object, Origin> before = seen.putIfAbsent(e.id(), entry);
+            Map.Entry<Element, Origin> before = seen.putIfAbsent(e.id(), entry);
             if (before == null) {
                 continue;
             }
@@ -502,10 +506,10 @@ final class NetReader {
             throw new InputException(o.id(), o.idKey(), detail);
         }
         Map<String, Integer> uses = new HashMap<>();
-        for (Map.Entry<Object, Origin> entry : elementsInOrder) {
-            ((org.ringsweep.api.net.Element) entry.getKey()).points().forEach(p -> uses.merge(p, 1, Integer::sum));
+        for (Map.Entry<Element, Origin> entry : elementsInOrder) {
+            entry.getKey().points().forEach(p -> uses.merge(p, 1, Integer::sum));
         }
-        for (Map.Entry<Object, Origin> entry : elementsInOrder) {
+        for (Map.Entry<Element, Origin> entry : elementsInOrder) {
             if (!(entry.getKey() instanceof Part p)) {
                 continue;
             }

@@ -5,10 +5,13 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.net.URISyntaxException;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.ringsweep.api.net.Location;
 import org.ringsweep.api.net.Net;
 import org.ringsweep.api.net.Point;
@@ -21,13 +24,16 @@ class PointParserTests {
     private final PointParser parser = new PointParser(new BuiltinModels());
     private Net net;
 
+    @TempDir
+    Path dir;
+
     @BeforeEach
     void loadTheFormatsExample() throws URISyntaxException {
         net = new NetFileLoader(new BuiltinModels()).load(Path.of(getClass().getResource("/nets/formats-example.yaml").toURI()));
     }
 
     private Point set(String... options) {
-        return parser.parse(net, java.util.Arrays.stream(options).map(PointParser::fromSetOption).toList());
+        return parser.parse(net, Arrays.stream(options).map(PointParser::fromSetOption).toList());
     }
 
     private InputException failure(String option) {
@@ -95,8 +101,7 @@ class PointParserTests {
 
     @Test
     void checksTheModelsCombinationRulesWithTheOverridesApplied() throws Exception {
-        Net noClamp = new NetFileLoader(new BuiltinModels()).load(java.nio.file.Files.writeString(
-                java.nio.file.Files.createTempFile("clamp", ".yaml"), """
+        Net noClamp = new NetFileLoader(new BuiltinModels()).load(Files.writeString(dir.resolve("clamp.yaml"), """
                         format: ringsweep/net-1
                         net: N
                         drivers: [ { pin: U1.1, model: ramp, v_high: 1.8, rise: 1ns, r_out: 20 } ]
