@@ -291,6 +291,9 @@ public final class Quantities {
         if (unit.isPresent()) {
             throw failure(expected, t, unit.get().kind().phrase);
         }
+        if (lonePrefix.isPresent()) {
+            throw failure(expected, t, "a pure number takes no SI prefix");
+        }
         throw failure(expected, t, "unknown unit `" + suffix + "`");
     }
 

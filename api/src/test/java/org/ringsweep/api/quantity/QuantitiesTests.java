@@ -123,6 +123,12 @@ class QuantitiesTests {
     }
 
     @Test
+    void rejectsAPrefixOnAPureNumber() {
+        QuantityFormatException e = assertThrows(QuantityFormatException.class, () -> Quantities.parse("2k", Dimension.DIMENSIONLESS));
+        assertEquals("expected a number such as `3.4` or `5%`, found `2k` (a pure number takes no SI prefix)", e.getMessage());
+    }
+
+    @Test
     void saysNothingWasFoundForEmptyText() {
         QuantityFormatException e = assertThrows(QuantityFormatException.class, () -> Quantities.parse(" ", Dimension.LENGTH));
         assertEquals("expected a length such as `45mm`, `500mil` or `0.045`, found nothing", e.getMessage());

@@ -8,11 +8,13 @@ import java.util.Set;
 import java.util.stream.Collectors;
 import org.ringsweep.api.model.ModelCatalog;
 import org.ringsweep.api.model.ModelDescriptor;
+import org.ringsweep.api.net.Driver;
 import org.ringsweep.api.net.Element;
 import org.ringsweep.api.net.Location;
 import org.ringsweep.api.net.Net;
 import org.ringsweep.api.net.Parameters;
 import org.ringsweep.api.net.Point;
+import org.ringsweep.api.net.Receiver;
 import org.ringsweep.api.net.Segment;
 import org.ringsweep.api.net.Value;
 import org.ringsweep.api.net.ValuePath;
@@ -120,6 +122,11 @@ public final class PointParser {
         Element e = net.element(path.id()).orElseThrow(() -> new InputException(location, key,
                 "no element `" + path.id() + "` on net " + net.name() + "; expected one of: "
                         + net.elements().stream().map(Element::id).collect(Collectors.joining(", "))));
+        if ((e instanceof Driver || e instanceof Receiver)
+                && ElementRules.model(catalog, e).isEmpty()) {
+            throw new InputException(location, key, ElementRules.describe(e) + " uses a model this run does not know;"
+                    + " expected a net loaded with the same models (see `ringsweep models`)");
+        }
         ValueRule rule = ElementRules.rule(catalog, e, path.param()).orElseThrow(() -> new InputException(location, key,
                 "unknown parameter `" + path.param() + "` for " + ElementRules.describe(e) + "; expected one of: "
                         + String.join(", ", ElementRules.parameterKeys(catalog, e))));
