@@ -33,10 +33,18 @@ final class RawParser {
     /** False once binary data have been passed: line numbers mean nothing after them. */
     private boolean linesKnown = true;
 
+    /** Bytes decoded per mapped piece; smaller in tests to exercise the piecewise path. */
+    private final long chunkBytes;
+
     RawParser(Path file, FileBytes bytes) {
+        this(file, bytes, CHUNK_BYTES);
+    }
+
+    RawParser(Path file, FileBytes bytes, long chunkBytes) {
         this.file = file;
         this.bytes = bytes;
         this.size = bytes.size();
+        this.chunkBytes = chunkBytes;
     }
 
     /** Header facts of one plot. */
@@ -291,7 +299,7 @@ final class RawParser {
         double[][] columns = new double[nvars][records];
         int stride = nvars * perValue;
         long recordBytes = (long) stride * Double.BYTES;
-        long chunkRecords = Math.max(1, CHUNK_BYTES / recordBytes);
+        long chunkRecords = Math.max(1, chunkBytes / recordBytes);
         int blockRecords = Math.max(1, BLOCK_DOUBLES / stride);
         double[] block = new double[blockRecords * stride];
         for (long first = 0; first < records; first += chunkRecords) {

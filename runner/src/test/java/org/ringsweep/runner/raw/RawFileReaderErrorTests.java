@@ -237,4 +237,33 @@ class RawFileReaderErrorTests {
         Path f = file("short.raw", plot + plot);
         assertMentions(failure(f), "has only 1 of the 2 points", "only the last plot");
     }
+
+    @Test
+    void headerOnlyPlotFollowedByAnotherPlotGivesBoth() throws IOException {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        out.writeBytes(binary(header("real", 2, "0", TWO_VARIABLES)));
+        out.writeBytes(binary(header("real", 2, "1", TWO_VARIABLES), 0.0, 4.0));
+
+        List<RawPlot> plots = RawFileReader.read(file("two.raw", out.toByteArray()));
+
+        assertEquals(2, plots.size());
+        assertTrue(plots.get(0).truncated());
+        assertEquals(0, plots.get(0).points());
+        assertArrayEquals(new double[] {4.0}, plots.get(1).column("v(a)").orElseThrow());
+    }
+
+    @Test
+    void crlfBinaryHeaderIsAccepted() throws IOException {
+        String h = header("real", 2, "2", TWO_VARIABLES);
+        byte[] lf = binary(h, 0.0, 1.0, 1e-9, 2.0);
+        int data = (h + "Binary:\n").length();
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        out.writeBytes((h + "Binary:\n").replace("\n", "\r\n").getBytes(StandardCharsets.ISO_8859_1));
+        out.write(lf, data, lf.length - data);
+
+        RawPlot plot = RawFileReader.read(file("crlf-bin.raw", out.toByteArray())).get(0);
+
+        assertFalse(plot.truncated());
+        assertArrayEquals(new double[] {0.0, 1e-9}, plot.column("time").orElseThrow());
+    }
 }
