@@ -217,15 +217,15 @@ final class RawParser {
         while (end < window && b.get(end) != '\n') {
             byte c = b.get(end);
             if ((c >= 0 && c < 0x20 && c != '\t' && c != '\r') || c == 0x7f) {
-                throw error(start, "found the non-text byte 0x" + String.format("%02x", c & 0xff) + " at byte offset "
-                        + (start + end) + " in a header line; expected ISO-8859-1 text lines up to `Binary:` or `Values:`"
-                        + " (is this an ngspice raw file?)");
+                throw error(new Line("", start, linesKnown ? line : 0), "found the non-text byte `0x"
+                        + String.format("%02x", c & 0xff) + "` at byte offset " + (start + end) + " in a header line;"
+                        + " expected ISO-8859-1 text lines up to `Binary:` or `Values:` (is this an ngspice raw file?)");
             }
             end++;
         }
         if (end == window && end > MAX_LINE) {
-            throw error(start, "a header line is longer than " + MAX_LINE + " bytes; expected short text lines"
-                    + " (is this an ngspice raw file?)");
+            throw error(new Line("", start, linesKnown ? line : 0), "found a header line longer than " + MAX_LINE
+                    + " bytes; expected short text lines (is this an ngspice raw file?)");
         }
         byte[] text = new byte[end];
         b.get(0, text);
@@ -264,8 +264,9 @@ final class RawParser {
         if (h.points() == 0) {
             // failed or killed run: the count was never rewritten; the rest of the file is this plot
             truncated = true;
-            records = startsWithTitle(dataStart) ? 0 : available / recordBytes;
-            pos = records == 0 && startsWithTitle(dataStart) ? dataStart : size;
+            boolean nextPlotFollows = startsWithTitle(dataStart); // a header-only plot, then another
+            records = nextPlotFollows ? 0 : available / recordBytes;
+            pos = nextPlotFollows ? dataStart : size;
         } else if (available / recordBytes < h.points()) {
             truncated = true; // cut short, usually mid-record by a kill
             records = available / recordBytes;

@@ -95,7 +95,7 @@ class RawFileReaderErrorTests {
         new Random(7).nextBytes(junk);
         junk[0] = 0x01; // a control byte in the first line for certain
         Path f = file("junk.raw", junk);
-        assertMentions(failure(f), "junk.raw", "non-text byte 0x01", "byte offset 0");
+        assertMentions(failure(f), "junk.raw", "line 1 (byte offset 0)", "non-text byte `0x01`", "is this an ngspice raw file?");
     }
 
     @Test

@@ -169,6 +169,10 @@ class RawFileReaderNgspiceTests {
         double[] out = ac.column("v(out)").orElseThrow();
         assertEquals(21, f.length); // 5 points per decade over 4 decades, both ends included
         for (int i = 0; i < f.length; i++) {
+            // `.ac dec 5 1k 10meg`: f = 1 kHz · 10^(i/5) (ngspice manual, AC analysis), real part of the scale
+            assertEquals(1e3 * Math.pow(10, i / 5.0), f[i], 1e-9 * f[i], "frequency " + i);
+        }
+        for (int i = 0; i < f.length; i++) {
             double wrc = 2 * Math.PI * f[i] * R * C;
             // RC low-pass H = 1 / (1 + jωRC), real part 1 / (1 + (ωRC)²) (any circuits textbook)
             assertEquals(1 / (1 + wrc * wrc), out[i], 1e-9, "Re v(out) at " + f[i] + " Hz");
