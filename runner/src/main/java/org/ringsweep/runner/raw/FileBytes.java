@@ -43,6 +43,11 @@ final class FileBytes {
         return new FileBytes(channel, size, null);
     }
 
+    /** Maps every slice on demand, as for files over 2 GiB; for tests of that path on small files. */
+    static FileBytes mappedOnDemand(FileChannel channel) throws IOException {
+        return new FileBytes(channel, channel.size(), null);
+    }
+
     /** File size (bytes). */
     long size() {
         return size;

@@ -33,10 +33,18 @@ final class RawParser {
     /** False once binary data have been passed: line numbers mean nothing after them. */
     private boolean linesKnown = true;
 
+    /** Bytes decoded per mapped piece; smaller in tests to exercise the piecewise path. */
+    private final long chunkBytes;
+
     RawParser(Path file, FileBytes bytes) {
+        this(file, bytes, CHUNK_BYTES);
+    }
+
+    RawParser(Path file, FileBytes bytes, long chunkBytes) {
         this.file = file;
         this.bytes = bytes;
         this.size = bytes.size();
+        this.chunkBytes = chunkBytes;
     }
 
     /** Header facts of one plot. */
@@ -209,15 +217,15 @@ final class RawParser {
         while (end < window && b.get(end) != '\n') {
             byte c = b.get(end);
             if ((c >= 0 && c < 0x20 && c != '\t' && c != '\r') || c == 0x7f) {
-                throw error(start, "found the non-text byte 0x" + String.format("%02x", c & 0xff) + " at byte offset "
-                        + (start + end) + " in a header line; expected ISO-8859-1 text lines up to `Binary:` or `Values:`"
-                        + " (is this an ngspice raw file?)");
+                throw error(new Line("", start, linesKnown ? line : 0), "found the non-text byte `0x"
+                        + String.format("%02x", c & 0xff) + "` at byte offset " + (start + end) + " in a header line;"
+                        + " expected ISO-8859-1 text lines up to `Binary:` or `Values:` (is this an ngspice raw file?)");
             }
             end++;
         }
         if (end == window && end > MAX_LINE) {
-            throw error(start, "a header line is longer than " + MAX_LINE + " bytes; expected short text lines"
-                    + " (is this an ngspice raw file?)");
+            throw error(new Line("", start, linesKnown ? line : 0), "found a header line longer than " + MAX_LINE
+                    + " bytes; expected short text lines (is this an ngspice raw file?)");
         }
         byte[] text = new byte[end];
         b.get(0, text);
@@ -256,8 +264,9 @@ final class RawParser {
         if (h.points() == 0) {
             // failed or killed run: the count was never rewritten; the rest of the file is this plot
             truncated = true;
-            records = startsWithTitle(dataStart) ? 0 : available / recordBytes;
-            pos = records == 0 && startsWithTitle(dataStart) ? dataStart : size;
+            boolean nextPlotFollows = startsWithTitle(dataStart); // a header-only plot, then another
+            records = nextPlotFollows ? 0 : available / recordBytes;
+            pos = nextPlotFollows ? dataStart : size;
         } else if (available / recordBytes < h.points()) {
             truncated = true; // cut short, usually mid-record by a kill
             records = available / recordBytes;
@@ -291,7 +300,7 @@ final class RawParser {
         double[][] columns = new double[nvars][records];
         int stride = nvars * perValue;
         long recordBytes = (long) stride * Double.BYTES;
-        long chunkRecords = Math.max(1, CHUNK_BYTES / recordBytes);
+        long chunkRecords = Math.max(1, chunkBytes / recordBytes);
         int blockRecords = Math.max(1, BLOCK_DOUBLES / stride);
         double[] block = new double[blockRecords * stride];
         for (long first = 0; first < records; first += chunkRecords) {
