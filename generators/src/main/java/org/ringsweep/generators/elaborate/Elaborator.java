@@ -52,6 +52,9 @@ import org.ringsweep.generators.names.NodeNamer;
  *     series resistor") becomes 1 µΩ: ngspice has no zero resistance and would otherwise replace
  *     it by 1 mΩ with only a warning (ngspice.md §1, §6). Negative values, and a capacitance or
  *     inductance of 0, are errors.</li>
+ * <li>A lossless segment whose delay is under 1/20 of the shortest full ramp is electrically short:
+ *     it becomes a lumped pi section with the same total L and C (see {@link #SHORT_LINE_FRACTION}),
+ *     and it does not limit the time step.</li>
  * <li>A segment is a lossless line (Z0, delay from {@link Segment#delaySeconds()}) with both
  *     reference nodes on ground. With {@code r_per_m} or {@code g_per_m} &gt; 0 it is a lossy RLGC
  *     line with {@code L = Z0·TD/len} and {@code C = TD/(Z0·len)} (lines-and-terminations.md §1),
@@ -86,7 +89,7 @@ import org.ringsweep.generators.names.NodeNamer;
  * <li>{@code simulation.stop} overrides the stop time; windows are cut at it and an edge that would
  *     start after it is dropped with a warning.</li>
  * <li>Maximum time step ({@code step: auto}): {@code min(shortest full ramp / 20, shortest segment
- *     delay / 4)}; ngspice.md §5 advises at most {@code min(tr/10, TD/2)}, this takes twice that
+ *     delay / 4)} over the segments that stay lines; ngspice.md §5 advises at most {@code min(tr/10, TD/2)}, this takes twice that
  *     margin. {@code simulation.step} overrides it. The output step equals the maximum step.</li>
  * </ul>
  *
@@ -99,6 +102,16 @@ public final class Elaborator {
     static final double LEAD_IN_MIN = 1e-9;
     static final double ZERO_OHMS = 1e-6;
     private static final int PATH_SEARCH_LIMIT = 200_000;
+
+    /**
+     * A lossless segment whose delay is below this fraction of the shortest full ramp is
+     * elaborated as a lumped pi section (C/2, L = Z0·TD, C/2 with C = TD/Z0) instead of a line.
+     * 1/20 is far below every rule of thumb for treating a trace as a line (the lowest,
+     * TD &gt; tr/6, lines-and-terminations.md §3), so the waveform does not change visibly; but
+     * ngspice's lossless line with a delay far below the time step, next to conducting clamp
+     * diodes, was seen to stall with ever smaller steps (a 12 ps line, 1.1 ns ramp, 3 ps step).
+     */
+    static final double SHORT_LINE_FRACTION = 1.0 / 20;
 
     private final Map<String, DriverModel> driverModels = new LinkedHashMap<>();
     private final Map<String, ReceiverModel> receiverModels = new LinkedHashMap<>();
@@ -193,7 +206,7 @@ public final class Elaborator {
                 double high = th.supply().map(s -> rails.volts(s).orElse(swing.high())).orElse(swing.high());
                 receivers.add(new ReceiverProbe(r.pin(), node, th.vil(), th.vih(), swing.low(), high));
             }
-            net.segments().forEach(this::segment);
+            net.segments().forEach(seg -> segment(seg, schedule.shortestRamp));
             net.parts().forEach(this::part);
 
             Map<String, String> notes = new LinkedHashMap<>();
@@ -371,7 +384,10 @@ public final class Elaborator {
             }
             double step = s.shortestRamp / 20;
             for (Segment seg : net.segments()) {
-                step = Math.min(step, segmentDelay(seg) / 4);
+                double td = segmentDelay(seg);
+                if (seg.isLossy() || !isElectricallyShort(td, s.shortestRamp)) {
+                    step = Math.min(step, td / 4);
+                }
             }
             return step;
         }
@@ -461,12 +477,20 @@ public final class Elaborator {
 
         // ---- elements ----
 
-        private void segment(Segment s) {
+        private void segment(Segment s, double shortestRamp) {
             double z0 = segmentZ0(s);
             double td = segmentDelay(s);
             String name = names.fresh(s.id());
             String a = nodes.node(s.from());
             String b = nodes.node(s.to());
+            if (!s.isLossy() && isElectricallyShort(td, shortestRamp)) {
+                // Pi section: the same total L = Z0·TD and C = TD/Z0 as the line (lines-and-terminations.md §1).
+                double c = td / z0;
+                primitives.add(new Primitive.Capacitor(names.fresh(s.id() + "_ca"), a, SafeName.GROUND, c / 2));
+                primitives.add(new Primitive.Inductor(name, a, b, z0 * td));
+                primitives.add(new Primitive.Capacitor(names.fresh(s.id() + "_cb"), b, SafeName.GROUND, c / 2));
+                return;
+            }
             if (!s.isLossy()) {
                 primitives.add(new Primitive.LosslessLine(name, a, SafeName.GROUND, b, SafeName.GROUND, z0, td));
                 return;
@@ -522,6 +546,10 @@ public final class Elaborator {
                         "expected a value ≥ 0, found `" + v + "`");
             }
             return v;
+        }
+
+        private boolean isElectricallyShort(double td, double shortestRamp) {
+            return td < SHORT_LINE_FRACTION * shortestRamp;
         }
 
         private double segmentZ0(Segment s) {

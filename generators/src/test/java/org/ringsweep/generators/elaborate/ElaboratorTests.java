@@ -316,4 +316,26 @@ class ElaboratorTests {
         assertFalse(e.warnings().iterator().hasNext());
         assertInstanceOf(Primitive.PwlVoltage.class, e.circuit().primitives().get(1));
     }
+
+    @Test
+    void electricallyShortSegmentBecomesAPiSectionWithTheLinesTotalLAndC() {
+        // 12.3 ps against a 1 ns (10-90) ramp = 1.25 ns full: 1/100 of the ramp, under the 1/20 rule.
+        Net net = new NetBuilder("short").rail("VCC", 3.3)
+                .driver(ramp("U1.1", "v_high", "VCC", "rise", 1e-9, "r_out", 30.0))
+                .receiver(cmos("U2.1", "c_in", 3e-12, "vih", 2.0, "vil", 0.8))
+                .segment(segment("TL1", "U1.1", "J1", "z0", 50.0, "delay", 12.3e-12))
+                .segment(segment("TL2", "J1", "U2.1", "z0", 50.0, "delay", 0.3e-9))
+                .build();
+        Elaboration e = elaborator.elaborate(net, "typ");
+        // lines-and-terminations.md §1: L = Z0·TD, C = TD/Z0 for the whole line.
+        Primitive.Inductor l = all(e, Primitive.Inductor.class).get(0);
+        assertEquals(50.0 * 12.3e-12, l.henries(), 1e-24);
+        double cTotal = all(e, Primitive.Capacitor.class).stream()
+                .filter(c -> !c.a().startsWith("u2") && !c.b().startsWith("u2"))
+                .mapToDouble(Primitive.Capacitor::farads).sum();
+        assertEquals(12.3e-12 / 50.0, cTotal, 1e-27);
+        assertEquals(1, all(e, Primitive.LosslessLine.class).size(), "the 0.3 ns segment stays a line");
+        // The short piece no longer limits the step: min(1.25 ns / 20, 0.3 ns / 4) = 62.5 ps (class rules).
+        assertEquals(62.5e-12, e.circuit().analysis().maxStep(), 1e-18);
+    }
 }

@@ -1,0 +1,95 @@
+package org.ringsweep.runner.bench;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.Stream;
+import org.ringsweep.runner.cli.Main;
+
+/**
+ * Orchestration overhead: {@code check} over N generated nets (load, elaborate, write decks, run
+ * ngspice, read raw files, measure, write records) against running the very same decks with bare
+ * {@code ngspice -n -b} one after another. Goal: check ≤ 1.10 × bare.
+ */
+public final class OverheadBenchmark {
+    private OverheadBenchmark() {
+    }
+
+    /**
+     * Runs the benchmark.
+     *
+     * @param workDir a scratch folder (nets and outputs go below it)
+     * @param ngspice the ngspice binary
+     * @param nets    how many nets
+     * @return a report line with both times and their ratio
+     */
+    public static String run(Path workDir, Path ngspice, int nets) {
+        try {
+            Path netDir = workDir.resolve("nets");
+            Files.createDirectories(netDir);
+            List<String> args = new ArrayList<>(List.of("check", "--quiet", "--out", workDir.resolve("out").toString()));
+            for (int i = 0; i < nets; i++) {
+                Path f = netDir.resolve(String.format(Locale.ROOT, "net%03d.yaml", i));
+                Files.writeString(f, netText(i), StandardCharsets.UTF_8);
+                args.add(f.toString());
+            }
+            // One untimed warm-up of the JVM path on a few nets.
+            quietCheck(List.of("check", "--quiet", "--out", workDir.resolve("warm").toString(), args.get(4), args.get(5)));
+            long t0 = System.nanoTime();
+            int code = quietCheck(args);
+            double checkSeconds = (System.nanoTime() - t0) / 1e9;
+            List<Path> decks;
+            try (Stream<Path> s = Files.walk(workDir.resolve("out"))) {
+                decks = s.filter(p -> p.toString().endsWith(".cir")).sorted().toList();
+            }
+            long t1 = System.nanoTime();
+            for (Path deck : decks) {
+                Process p = new ProcessBuilder(ngspice.toString(), "-n", "-b", deck.getFileName().toString())
+                        .directory(deck.getParent().toFile())
+                        .redirectOutput(ProcessBuilder.Redirect.DISCARD)
+                        .redirectError(ProcessBuilder.Redirect.DISCARD)
+                        .start();
+                p.waitFor();
+            }
+            double bareSeconds = (System.nanoTime() - t1) / 1e9;
+            return String.format(Locale.ROOT,
+                    "overhead: %d nets (%d decks), check %.2f s (exit %d), bare ngspice %.2f s, ratio %.3f (goal <= 1.10)",
+                    nets, decks.size(), checkSeconds, code, bareSeconds, checkSeconds / bareSeconds);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted", e);
+        }
+    }
+
+    private static int quietCheck(List<String> args) {
+        StringWriter sink = new StringWriter();
+        return Main.run(args.toArray(String[]::new), new PrintWriter(sink), new PrintWriter(sink));
+    }
+
+    /** A point-to-point net with a series resistor; lengths and values vary with i. */
+    private static String netText(int i) {
+        double length = 40 + (i % 10) * 12;
+        int r = 10 + (i % 7) * 5;
+        return "format: ringsweep/net-1\n"
+                + "net: BENCH_" + i + "\n"
+                + "rails: { VCC: 3.3 }\n"
+                + "drivers:\n  - { pin: U1.1, model: ramp, v_high: VCC, rise: 1ns, r_out: 15 }\n"
+                + "receivers:\n  - { pin: U2.1, model: cmos, c_in: 4pF, vih: 2.0, vil: 0.8, clamp: rails, supply: VCC }\n"
+                + "  - { pin: U3.1, model: cmos, c_in: 4pF, vih: 2.0, vil: 0.8 }\n"
+                + "segments:\n"
+                + "  - { from: U1.1, to: R1.1, z0: 50, length: 3mm, er_eff: 3.4 }\n"
+                + "  - { from: R1.2, to: J1, z0: 50, length: " + length + "mm, er_eff: 3.4 }\n"
+                + "  - { from: J1, to: U2.1, z0: 50, length: 20mm, er_eff: 3.4 }\n"
+                + "  - { from: J1, to: U3.1, z0: 50, length: 15mm, er_eff: 3.4 }\n"
+                + "parts:\n  - { ref: R1, kind: resistor, value: " + r + ", between: [R1.1, R1.2] }\n";
+    }
+}

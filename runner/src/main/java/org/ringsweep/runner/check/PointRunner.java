@@ -1,0 +1,190 @@
+package org.ringsweep.runner.check;
+
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.ringsweep.api.net.Net;
+import org.ringsweep.api.net.Point;
+import org.ringsweep.api.net.Receiver;
+import org.ringsweep.api.wave.Waveforms;
+import org.ringsweep.generators.deck.DeckOptions;
+import org.ringsweep.generators.deck.DeckWriter;
+import org.ringsweep.generators.elaborate.EdgeEvent;
+import org.ringsweep.generators.elaborate.Elaboration;
+import org.ringsweep.generators.elaborate.Elaborator;
+import org.ringsweep.generators.elaborate.ReceiverProbe;
+import org.ringsweep.generators.names.NodeNamer;
+import org.ringsweep.runner.engine.SimulationEngine;
+import org.ringsweep.runner.engine.SimulationJob;
+import org.ringsweep.runner.engine.SimulationOutcome;
+import org.ringsweep.runner.measure.EdgeMeasurer;
+import org.ringsweep.runner.measure.EdgeMetrics;
+import org.ringsweep.runner.measure.EdgeWindow;
+import org.ringsweep.runner.measure.Levels;
+import org.ringsweep.runner.results.EdgeResult;
+import org.ringsweep.runner.results.ReceiverResult;
+import org.ringsweep.runner.results.ResultRecord;
+import org.ringsweep.runner.results.Verdict;
+import org.ringsweep.runner.results.ViolationRecord;
+import org.ringsweep.runner.verdict.EffectiveLimits;
+import org.ringsweep.runner.verdict.LimitChecker;
+import org.ringsweep.runner.verdict.LimitDefaults;
+import org.ringsweep.runner.verdict.Violation;
+
+/**
+ * Runs one point of one net from net to result record. Immutable and thread-safe: every
+ * collaborator is read-only once built, and each point writes only its own files.
+ *
+ * <p>Files: {@code OUT/<net>/<corner>-<nnnn>.cir} and, beside it, the raw file and the engine's
+ * logs. Nothing else is written.
+ */
+public final class PointRunner {
+    /**
+     * Hysteresis of the threshold-crossing detector as a fraction of the swing: 1 %, the low end
+     * of the 1–2 % that waveform-metrics.md §4.3 gives as typical (common practice), so solver
+     * noise that merely touches a threshold is not counted as a second crossing.
+     */
+    public static final double HYSTERESIS_FRACTION = 0.01;
+
+    private final Elaborator elaborator;
+    private final DeckWriter deckWriter;
+    private final Optional<SimulationEngine> engine;
+    private final Path outDir;
+    private final Duration timeout;
+
+    /**
+     * @param elaborator the elaborator
+     * @param deckWriter the deck writer (built once per run)
+     * @param engine     the engine, or empty to write decks only
+     * @param outDir     the output folder ({@code --out})
+     * @param timeout    per-point simulation timeout
+     */
+    public PointRunner(Elaborator elaborator, DeckWriter deckWriter, Optional<SimulationEngine> engine, Path outDir, Duration timeout) {
+        this.elaborator = elaborator;
+        this.deckWriter = deckWriter;
+        this.engine = engine;
+        this.outDir = outDir;
+        this.timeout = timeout;
+    }
+
+    /** What one point is: the corner, its overrides and (for sweeps) the swept values. */
+    public record PointSpec(String corner, Point overrides, Map<String, Double> swept, int index) {
+    }
+
+    /** The deck of a point, written but not simulated. */
+    public record WrittenDeck(Path deck, Elaboration elaboration, String deckText) {
+    }
+
+    /**
+     * Elaborates the point and writes its deck.
+     *
+     * @throws org.ringsweep.generators.elaborate.ElaborationException for input the model rejects
+     */
+    public WrittenDeck writeDeck(Net net, PointSpec spec) {
+        Net applied = net.with(spec.overrides());
+        Elaboration elab = elaborator.elaborate(applied, label(spec));
+        String stem = deckStem(spec);
+        String deckText = deckWriter.render(elab.circuit(), new DeckOptions(rawName(stem), true, false));
+        Path dir = netDir(net);
+        Path deck = dir.resolve(stem + ".cir");
+        try {
+            java.nio.file.Files.createDirectories(dir);
+            java.nio.file.Files.writeString(deck, deckText, java.nio.charset.StandardCharsets.UTF_8);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException("cannot write deck " + deck + ": " + e.getMessage(), e);
+        }
+        return new WrittenDeck(deck, elab, deckText);
+    }
+
+    /**
+     * Runs the point: deck, simulation, measurements, verdict. A failed simulation gives an
+     * error record quoting the engine; it never throws for that.
+     */
+    public ResultRecord run(Net net, PointSpec spec) {
+        WrittenDeck written = writeDeck(net, spec);
+        Elaboration elab = written.elaboration();
+        SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine for run()"));
+        String stem = deckStem(spec);
+        SimulationJob job = new SimulationJob(written.deckText(), written.deck().getParent(), stem + ".cir", rawName(stem),
+                elab.circuit().analysis().stop(), timeout, elab.circuit().probes());
+        SimulationOutcome outcome = eng.run(job);
+        if (outcome instanceof SimulationOutcome.Failure f) {
+            return record(net, spec, eng, Verdict.ERROR, List.of(), written.deck(), f.message(), List.of(), elab.warnings());
+        }
+        Waveforms w = ((SimulationOutcome.Success) outcome).waveforms();
+        Net applied = net.with(spec.overrides());
+        List<ReceiverResult> receivers = new ArrayList<>();
+        java.util.Set<String> defaulted = new java.util.TreeSet<>();
+        Verdict worst = Verdict.PASS;
+        for (ReceiverProbe probe : elab.receivers()) {
+            Receiver receiver = applied.receivers().stream().filter(r -> r.pin().equals(probe.pin())).findFirst().orElseThrow();
+            double swing = elab.vHigh() - elab.vLow();
+            EffectiveLimits limits = LimitDefaults.resolve(applied.limitsFor(receiver), swing);
+            defaulted.addAll(limits.defaultedKeys());
+            ReceiverResult rr = measureReceiver(w, probe, elab.edges(), limits, swing);
+            receivers.add(rr);
+            worst = worst.worst(rr.verdict());
+        }
+        return record(net, spec, eng, worst, receivers, written.deck(), "", List.copyOf(defaulted), elab.warnings());
+    }
+
+    private static ReceiverResult measureReceiver(Waveforms w, ReceiverProbe probe, List<EdgeEvent> edges,
+                                                  EffectiveLimits limits, double swing) {
+        double[] t = w.times();
+        double[] v = w.signal(probe.node()).orElseThrow(() -> new IllegalStateException("engine returned no signal for " + probe.node()));
+        Levels levels = new Levels(probe.lowRail(), probe.highRail(), probe.vil(), probe.vih(),
+                limits.settleBandV(), HYSTERESIS_FRACTION * swing);
+        Map<String, EdgeResult> results = new LinkedHashMap<>();
+        List<ViolationRecord> violations = new ArrayList<>();
+        double lastSample = t[t.length - 1];
+        for (EdgeEvent e : edges) {
+            // The last window ends at the stop time; ngspice's last time point can differ from it by
+            // rounding (the engine already checked that the run reached the stop time within 1e-9).
+            double end = Math.min(e.end(), lastSample);
+            EdgeMetrics m = EdgeMeasurer.measure(t, v, new EdgeWindow(e.direction(), e.start(), e.source50(), end), levels);
+            results.put(e.direction().word(), MetricsView.of(m));
+            for (Violation viol : LimitChecker.check(m, limits)) {
+                violations.add(new ViolationRecord(viol.limit(), viol.edge().word(), viol.measured(), viol.limitValue(),
+                        limits.defaultedKeys().contains(viol.limit()), viol.message()));
+            }
+        }
+        return new ReceiverResult(probe.pin(), violations.isEmpty() ? Verdict.PASS : Verdict.FAIL, results, violations);
+    }
+
+    private ResultRecord record(Net net, PointSpec spec, SimulationEngine eng, Verdict verdict, List<ReceiverResult> receivers,
+                                Path deck, String error, List<String> defaulted, List<String> warnings) {
+        return new ResultRecord(net.name(), spec.corner(), spec.swept(), eng.name(), eng.version(), verdict, receivers,
+                deck.toString(), error, net.source(), net.sourceHash(), defaulted, warnings);
+    }
+
+    /** The error record for a point that could not even be elaborated or simulated. */
+    public ResultRecord errorRecord(Net net, PointSpec spec, String message) {
+        String name = engine.map(SimulationEngine::name).orElse("");
+        String version = engine.map(SimulationEngine::version).orElse("");
+        return new ResultRecord(net.name(), spec.corner(), spec.swept(), name, version, Verdict.ERROR, List.of(),
+                netDir(net).resolve(deckStem(spec) + ".cir").toString(), message, net.source(), net.sourceHash(), List.of(), List.of());
+    }
+
+    /** The folder of a net under the output folder. */
+    public Path netDir(Net net) {
+        return outDir.resolve(NodeNamer.safeFileStem(net.name()));
+    }
+
+    private static String deckStem(PointSpec spec) {
+        return NodeNamer.safeFileStem(spec.corner()) + String.format(java.util.Locale.ROOT, "-%04d", spec.index());
+    }
+
+    private static String rawName(String stem) {
+        return stem.toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9_]", "_") + ".raw";
+    }
+
+    private static String label(PointSpec spec) {
+        StringBuilder b = new StringBuilder(spec.corner());
+        spec.overrides().values().forEach((k, v) -> b.append(' ').append(k).append('=').append(v.display()));
+        return b.toString();
+    }
+}

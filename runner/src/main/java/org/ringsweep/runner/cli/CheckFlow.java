@@ -1,0 +1,162 @@
+package org.ringsweep.runner.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.ringsweep.api.net.Net;
+import org.ringsweep.api.net.NetValidationException;
+import org.ringsweep.api.net.Point;
+import org.ringsweep.generators.deck.DeckWriter;
+import org.ringsweep.generators.elaborate.ElaborationException;
+import org.ringsweep.generators.elaborate.Elaborator;
+import org.ringsweep.generators.models.BuiltinModels;
+import org.ringsweep.runner.check.Caution;
+import org.ringsweep.runner.check.PointRunner;
+import org.ringsweep.runner.check.ResultsFile;
+import org.ringsweep.runner.engine.EngineChoice;
+import org.ringsweep.runner.engine.EngineNotFoundException;
+import org.ringsweep.runner.engine.EngineSelector;
+import org.ringsweep.runner.engine.SimulationEngine;
+import org.ringsweep.runner.input.InputException;
+import org.ringsweep.runner.input.NetFileLoader;
+import org.ringsweep.runner.input.PointParser;
+import org.ringsweep.runner.results.ResultJson;
+import org.ringsweep.runner.results.ResultRecord;
+import org.ringsweep.runner.results.Verdict;
+
+/**
+ * The shared body of {@code check}, {@code deck} and {@code demo}: load every net (all input
+ * errors first, nothing simulated when there is one), plan the points, then write decks or run
+ * them one by one, appending each record to {@code results.jsonl} as it finishes.
+ */
+final class CheckFlow {
+    /** What a run gave. */
+    record Outcome(int exitCode, List<ResultRecord> records) {
+    }
+
+    private final CommonOptions common;
+    private final PrintWriter out;
+    private final PrintWriter err;
+
+    CheckFlow(CommonOptions common, PrintWriter out, PrintWriter err) {
+        this.common = common;
+        this.out = out;
+        this.err = err;
+    }
+
+    /** Runs (simulate = true) or writes decks only, and returns the exit code. */
+    int run(List<Path> files, boolean corners, List<String> sets, boolean simulate) {
+        return execute(files, corners, sets, simulate).exitCode();
+    }
+
+    Outcome execute(List<Path> files, boolean corners, List<String> sets, boolean simulate) {
+        BuiltinModels catalog = new BuiltinModels();
+        NetFileLoader loader = new NetFileLoader(catalog);
+        PointParser points = new PointParser(catalog);
+        Elaborator elaborator = new Elaborator();
+        Map<Net, List<PointRunner.PointSpec>> plan = new LinkedHashMap<>();
+        List<String> problems = new ArrayList<>();
+        for (Path file : files) {
+            try {
+                Net net = loader.load(file);
+                Point overrides = points.parse(net, sets.stream().map(PointParser::fromSetOption).toList());
+                List<PointRunner.PointSpec> specs = new ArrayList<>();
+                specs.add(new PointRunner.PointSpec("typ", overrides, Map.of(), 1));
+                if (corners) {
+                    net.corners().forEach((name, corner) -> specs.add(new PointRunner.PointSpec(name, corner.then(overrides), Map.of(), 1)));
+                }
+                for (PointRunner.PointSpec s : specs) {
+                    elaborator.elaborate(net.with(s.overrides()), s.corner()); // input check before anything runs
+                }
+                plan.put(net, specs);
+            } catch (InputException | ElaborationException e) {
+                problems.add(e.getMessage());
+            } catch (NetValidationException e) {
+                problems.add(file + ": " + e.getMessage());
+            }
+        }
+        if (!problems.isEmpty()) {
+            problems.forEach(p -> err.println("ringsweep: " + p));
+            return new Outcome(ExitCodes.INPUT, List.of());
+        }
+        DeckWriter decks;
+        try {
+            decks = common.templates == null ? new DeckWriter() : DeckWriter.withTemplateDir(common.templates);
+        } catch (RuntimeException e) {
+            err.println("ringsweep: --templates " + common.templates + ": " + e.getMessage());
+            return new Outcome(ExitCodes.INPUT, List.of());
+        }
+        Optional<SimulationEngine> engine = Optional.empty();
+        if (simulate) {
+            EngineChoice choice;
+            try {
+                choice = EngineChoice.parse(common.engine);
+            } catch (IllegalArgumentException e) {
+                err.println("ringsweep: --engine: " + e.getMessage());
+                return new Outcome(ExitCodes.INPUT, List.of());
+            }
+            try {
+                engine = Optional.of(EngineSelector.select(choice, System.getenv()));
+            } catch (EngineNotFoundException e) {
+                err.println("ringsweep: " + e.getMessage());
+                return new Outcome(ExitCodes.SIMULATION, List.of());
+            }
+        }
+        Duration timeout = Duration.ofMillis(Math.round(common.timeoutSeconds * 1000));
+        PointRunner runner = new PointRunner(elaborator, decks, engine, common.out, timeout);
+        if (!simulate) {
+            for (Map.Entry<Net, List<PointRunner.PointSpec>> e : plan.entrySet()) {
+                for (PointRunner.PointSpec s : e.getValue()) {
+                    out.println(runner.writeDeck(e.getKey(), s).deck());
+                }
+            }
+            return new Outcome(ExitCodes.OK, List.of());
+        }
+        List<ResultRecord> records = new ArrayList<>();
+        try (ResultsFile results = ResultsFile.create(common.out)) {
+            for (Map.Entry<Net, List<PointRunner.PointSpec>> e : plan.entrySet()) {
+                for (PointRunner.PointSpec s : e.getValue()) {
+                    ResultRecord r;
+                    try {
+                        r = runner.run(e.getKey(), s);
+                    } catch (RuntimeException ex) {
+                        // A model or engine failure for this point: record it and go on.
+                        r = runner.errorRecord(e.getKey(), s, String.valueOf(ex.getMessage()));
+                    }
+                    results.append(r);
+                    records.add(r);
+                    if (common.json) {
+                        out.println(ResultJson.line(r));
+                        out.flush();
+                    }
+                }
+            }
+        }
+        if (!common.json) {
+            ResultTable.print(records, out, common.quiet);
+            if (!common.quiet) {
+                out.println();
+                out.println(Caution.TEXT);
+            }
+        }
+        return new Outcome(exitCode(records), records);
+    }
+
+    /** 3 when any point is an error (results are incomplete), else 1 when any fails, else 0. */
+    static int exitCode(List<ResultRecord> records) {
+        Verdict worst = Verdict.PASS;
+        for (ResultRecord r : records) {
+            worst = worst.worst(r.verdict());
+        }
+        return switch (worst) {
+            case PASS -> ExitCodes.OK;
+            case FAIL -> ExitCodes.VIOLATION;
+            case ERROR -> ExitCodes.SIMULATION;
+        };
+    }
+}

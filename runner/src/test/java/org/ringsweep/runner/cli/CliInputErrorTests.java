@@ -1,0 +1,86 @@
+package org.ringsweep.runner.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/** Bad input through the command line: exit 2, a message naming file, line and key, no stack trace, nothing simulated. */
+class CliInputErrorTests {
+    @TempDir
+    Path out;
+
+    static Stream<Path> malformedFiles() throws IOException {
+        Path dir = CliRun.resource("malformed");
+        try (Stream<Path> s = Files.list(dir)) {
+            List<Path> files = s.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
+            return files.stream();
+        }
+    }
+
+    private static String header(Path file, String name) throws IOException {
+        for (String line : Files.readAllLines(file)) {
+            if (line.startsWith("# " + name + ":")) {
+                return line.substring(name.length() + 3).strip();
+            }
+        }
+        return "";
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("malformedFiles")
+    void malformedNetFileExitsTwoNamingFileLineAndKey(Path file) throws IOException {
+        CliRun run = CliRun.of("check", "--out", out.toString(), file.toString());
+        assertEquals(ExitCodes.INPUT, run.exitCode(), run.err());
+        assertTrue(run.err().contains(file.getFileName().toString()), run.err());
+        String line = header(file, "line");
+        if (!line.isEmpty()) {
+            assertTrue(run.err().contains(":" + line + ":"), () -> "line " + line + " not in: " + run.err());
+        }
+        String key = header(file, "key");
+        if (!key.isEmpty()) {
+            assertTrue(run.err().contains(key), () -> "key " + key + " not in: " + run.err());
+        }
+        assertTrue(run.err().contains(header(file, "expect")), run.err());
+        assertFalse(run.err().contains("\tat ") || run.err().contains("Exception"), "no stack trace: " + run.err());
+        assertFalse(Files.exists(out.resolve("results.jsonl")), "nothing simulated");
+    }
+
+    @Test
+    void missingNetFileIsAnInputError() {
+        CliRun run = CliRun.of("check", "--out", out.toString(), out.resolve("nope.yaml").toString());
+        assertEquals(ExitCodes.INPUT, run.exitCode());
+        assertTrue(run.err().contains("nope.yaml"), run.err());
+    }
+
+    @Test
+    void unknownOptionIsAUsageError() {
+        CliRun run = CliRun.of("check", "--no-such-option", "x.yaml");
+        assertEquals(ExitCodes.INPUT, run.exitCode());
+        assertTrue(run.err().contains("--no-such-option"), run.err());
+    }
+
+    @Test
+    void unknownSetPathListsTheValidIds() {
+        CliRun run = CliRun.of("check", "--out", out.toString(), "--set", "R99/value=10",
+                CliRun.resource("physics/matched-series.yaml").toString());
+        assertEquals(ExitCodes.INPUT, run.exitCode(), run.err());
+        assertTrue(run.err().contains("R99") && run.err().contains("R1"), run.err());
+    }
+
+    @Test
+    void unknownEngineIsAUsageError() {
+        CliRun run = CliRun.of("check", "--engine", "quantum", "--out", out.toString(),
+                CliRun.resource("physics/matched-series.yaml").toString());
+        assertEquals(ExitCodes.INPUT, run.exitCode(), run.err());
+    }
+}
