@@ -18,6 +18,7 @@ import org.ringsweep.generators.elaborate.Elaboration;
 import org.ringsweep.generators.elaborate.Elaborator;
 import org.ringsweep.generators.elaborate.ReceiverProbe;
 import org.ringsweep.generators.names.NodeNamer;
+import org.ringsweep.runner.engine.FailureKind;
 import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.engine.SimulationJob;
 import org.ringsweep.runner.engine.SimulationOutcome;
@@ -87,8 +88,11 @@ public final class PointRunner {
     public WrittenDeck writeDeck(Net net, PointSpec spec) {
         Net applied = net.with(spec.overrides());
         Elaboration elab = elaborator.elaborate(applied, label(spec));
-        String stem = deckStem(spec);
-        String deckText = deckWriter.render(elab.circuit(), new DeckOptions(rawName(stem), true, false));
+        return writeDeck(net, elab, deckStem(spec), false);
+    }
+
+    private WrittenDeck writeDeck(Net net, Elaboration elab, String stem, boolean conservative) {
+        String deckText = deckWriter.render(elab.circuit(), new DeckOptions(rawName(stem), true, conservative));
         Path dir = netDir(net);
         Path deck = dir.resolve(stem + ".cir");
         try {
@@ -101,22 +105,35 @@ public final class PointRunner {
     }
 
     /**
-     * Runs the point: deck, simulation, measurements, verdict. A failed simulation gives an
-     * error record quoting the engine; it never throws for that.
+     * Runs the point: deck, simulation, measurements, verdict. A run that fails to converge,
+     * stalls, stops early or times out is retried once with the deck writer's conservative
+     * options (Gear integration, tighter reltol, a quarter of the time step; see
+     * {@link DeckOptions#conservative()}), in a deck of its own ({@code <stem>-conservative.cir}).
+     * A point that still fails gives an error record quoting the engine; it never throws for that.
      */
     public ResultRecord run(Net net, PointSpec spec) {
-        WrittenDeck written = writeDeck(net, spec);
-        Elaboration elab = written.elaboration();
+        Net applied = net.with(spec.overrides());
+        Elaboration elab = elaborator.elaborate(applied, label(spec));
         SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine for run()"));
+        List<String> warnings = new ArrayList<>(elab.warnings());
         String stem = deckStem(spec);
-        SimulationJob job = new SimulationJob(written.deckText(), written.deck().getParent(), stem + ".cir", rawName(stem),
-                elab.circuit().analysis().stop(), timeout, elab.circuit().probes());
-        SimulationOutcome outcome = eng.run(job);
+        WrittenDeck written = writeDeck(net, elab, stem, false);
+        SimulationOutcome outcome = eng.run(job(written, stem, elab));
+        if (outcome instanceof SimulationOutcome.Failure first && isRetryable(first.kind())) {
+            String retryStem = stem + "-conservative";
+            written = writeDeck(net, elab, retryStem, true);
+            outcome = eng.run(job(written, retryStem, elab));
+            String firstText = "first run failed (" + first.kind().name().toLowerCase(java.util.Locale.ROOT) + "): " + first.message();
+            if (outcome instanceof SimulationOutcome.Failure second) {
+                return record(net, spec, eng, Verdict.ERROR, List.of(), written.deck(),
+                        firstText + "; the retry with conservative options failed too: " + second.message(), List.of(), warnings);
+            }
+            warnings.add(firstText + "; retried with conservative options (Gear integration, reltol 1e-4, smaller step) and succeeded");
+        }
         if (outcome instanceof SimulationOutcome.Failure f) {
-            return record(net, spec, eng, Verdict.ERROR, List.of(), written.deck(), f.message(), List.of(), elab.warnings());
+            return record(net, spec, eng, Verdict.ERROR, List.of(), written.deck(), f.message(), List.of(), warnings);
         }
         Waveforms w = ((SimulationOutcome.Success) outcome).waveforms();
-        Net applied = net.with(spec.overrides());
         List<ReceiverResult> receivers = new ArrayList<>();
         java.util.Set<String> defaulted = new java.util.TreeSet<>();
         Verdict worst = Verdict.PASS;
@@ -129,7 +146,20 @@ public final class PointRunner {
             receivers.add(rr);
             worst = worst.worst(rr.verdict());
         }
-        return record(net, spec, eng, worst, receivers, written.deck(), "", List.copyOf(defaulted), elab.warnings());
+        return record(net, spec, eng, worst, receivers, written.deck(), "", List.copyOf(defaulted), warnings);
+    }
+
+    /** Failures a different integration method or step can cure; syntax and set-up problems cannot. */
+    private static boolean isRetryable(FailureKind kind) {
+        return switch (kind) {
+            case CONVERGENCE, TIMEOUT, TRUNCATED_OUTPUT -> true;
+            default -> kind.name().equals("STALLED");
+        };
+    }
+
+    private SimulationJob job(WrittenDeck written, String stem, Elaboration elab) {
+        return new SimulationJob(written.deckText(), written.deck().getParent(), stem + ".cir", rawName(stem),
+                elab.circuit().analysis().stop(), timeout, elab.circuit().probes());
     }
 
     private static ReceiverResult measureReceiver(Waveforms w, ReceiverProbe probe, List<EdgeEvent> edges,
@@ -176,6 +206,12 @@ public final class PointRunner {
 
     private static String deckStem(PointSpec spec) {
         return NodeNamer.safeFileStem(spec.corner()) + String.format(java.util.Locale.ROOT, "-%04d", spec.index());
+    }
+
+    /** The raw file written beside a deck this runner wrote ({@code typ-0001.cir} → {@code typ_0001.raw}). */
+    public static Path rawFileOf(Path deck) {
+        String name = deck.getFileName().toString();
+        return deck.resolveSibling(rawName(name.endsWith(".cir") ? name.substring(0, name.length() - 4) : name));
     }
 
     private static String rawName(String stem) {

@@ -94,7 +94,9 @@ sealed interface ValueRule {
     /**
      * The rule for a model parameter. Physical sizes (time, resistance, capacitance, inductance,
      * length, frequency) must be positive, or non-negative when the model's default is 0 (which
-     * shows that zero is meaningful, e.g. an extra delay); voltages and other numbers may take any sign.
+     * shows that zero is meaningful, e.g. an extra delay); a capacitance may always be 0 (an ideal
+     * input with no capacitance, the reference case of the textbook bounce diagrams); voltages and
+     * other numbers may take any sign.
      */
     static ValueRule forSpec(ParameterSpec spec) {
         return switch (spec.type()) {
@@ -108,7 +110,8 @@ sealed interface ValueRule {
 
     private static Bound boundForModelNumber(ParameterSpec spec) {
         return switch (spec.dimension()) {
-            case TIME, RESISTANCE, CAPACITANCE, INDUCTANCE, LENGTH, FREQUENCY ->
+            case CAPACITANCE -> Bound.NON_NEGATIVE;
+            case TIME, RESISTANCE, INDUCTANCE, LENGTH, FREQUENCY ->
                     spec.defaultText().strip().equals("0") ? Bound.NON_NEGATIVE : Bound.POSITIVE;
             default -> Bound.ANY;
         };

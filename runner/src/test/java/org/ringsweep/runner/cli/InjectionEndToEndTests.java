@@ -27,15 +27,20 @@ class InjectionEndToEndTests {
         Ngspice.require();
         Path sentinel = work.resolve("pwned");
         Path out = work.resolve("out");
+        // The net name is free text (formats.md), so it carries whole lines of deck and control syntax.
         String evil = "\"X\\n.control\\nshell touch " + sentinel + "\\nquit\\n.endc\\n* ; $ `touch " + sentinel + "` ../../escape\"";
+        // Point, id and corner names may not hold blanks, `/` or `=` (paths use them), but everything else.
+        String drv = "\"U1.1;.include;`touch_" + sentinel.getFileName() + "`\"";
+        String rcv = "\"..U2;1$shell>pwned\"";
+        String junction = "\"*J1+.control\"";
         String net = "format: ringsweep/net-1\n"
                 + "net: " + evil + "\n"
                 + "rails: { VCC: 3.3 }\n"
-                + "drivers:\n  - { pin: \"U1.1\\n.include /etc/passwd\", model: ramp, v_high: VCC, rise: 1ns, r_out: 20 }\n"
-                + "receivers:\n  - { pin: \"../../U2;1 shell rm\", model: cmos, c_in: 2pF, vih: 2.0, vil: 0.8 }\n"
-                + "segments:\n  - { id: \"TL1\\n+ .control\", from: \"U1.1\\n.include /etc/passwd\", to: \"J*1 > " + sentinel + "\", z0: 50, delay: 1ns }\n"
-                + "  - { from: \"J*1 > " + sentinel + "\", to: \"../../U2;1 shell rm\", z0: 50, delay: 0.5ns }\n"
-                + "corners:\n  \"../../slow\\nshell id\": { \"U1.1\\n.include /etc/passwd/rise\": 2ns }\n";
+                + "drivers:\n  - { pin: " + drv + ", model: ramp, v_high: VCC, rise: 1ns, r_out: 20 }\n"
+                + "receivers:\n  - { pin: " + rcv + ", model: cmos, c_in: 2pF, vih: 2.0, vil: 0.8 }\n"
+                + "segments:\n  - { id: \"TL1;.endc\", from: " + drv + ", to: " + junction + ", z0: 50, delay: 1ns }\n"
+                + "  - { from: " + junction + ", to: " + rcv + ", z0: 50, delay: 0.5ns }\n"
+                + "corners:\n  \"..;shell\": { \"U1.1;.include;`touch_" + sentinel.getFileName() + "`/rise\": 2ns }\n";
         Path netFile = work.resolve("evil.yaml");
         Files.writeString(netFile, net);
         CliRun run = CliRun.of("check", "--corners", "--out", out.toString(), netFile.toString());
@@ -52,9 +57,15 @@ class InjectionEndToEndTests {
         assertEquals(2, decks.size(), written.toString());
         for (Path deck : decks) {
             String text = Files.readString(deck);
-            assertFalse(text.contains("shell"), text);
-            assertFalse(text.toLowerCase(java.util.Locale.ROOT).contains(".include"), text);
-            assertFalse(text.contains("/etc/passwd"), text);
+            for (String line : text.split("\n")) {
+                if (line.startsWith("*")) {
+                    continue; // comment lines carry the escaped names for humans
+                }
+                String lower = line.toLowerCase(java.util.Locale.ROOT);
+                assertFalse(lower.startsWith("shell") || lower.contains(" shell ") || lower.contains("`"), line);
+                assertFalse(lower.contains(".include"), line);
+                assertFalse(lower.contains(".endc") && !lower.equals(".endc"), line);
+            }
             assertEquals(1, text.split("\n\\.control", -1).length - 1, "exactly our one .control block:\n" + text);
             for (String line : text.split("\n")) {
                 assertFalse(line.startsWith("+"), "no continuation line from user text: " + line);

@@ -9,6 +9,7 @@ import java.util.List;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.ringsweep.runner.check.PointRunner;
 import org.ringsweep.runner.raw.RawFileReader;
 import org.ringsweep.runner.raw.RawPlot;
 import org.ringsweep.runner.testing.Ngspice;
@@ -41,7 +42,7 @@ class PhysicsThroughNgspiceTests {
 
     /** The receiver waveform of the record's raw file, sampled at time t. */
     private static double sampleAt(JsonNode record, String node, double t) {
-        Path raw = Path.of(record.get("deck").asText().replaceAll("\\.cir$", ".raw"));
+        Path raw = PointRunner.rawFileOf(Path.of(record.get("deck").asText()));
         RawPlot plot = RawFileReader.read(raw).get(0);
         double[] time = plot.column("time").orElseThrow();
         double[] v = plot.column("v(" + node + ")").orElseThrow();
@@ -106,7 +107,7 @@ class PhysicsThroughNgspiceTests {
         // The deck's header names the schedule; the rise edge's source 50 % point is the record's
         // settle reference: settle_s + the settling instant is not recoverable, so we read the
         // driver-pin waveform instead: the near end first reaches the launch level Vi at t50.
-        Path raw = Path.of(record.get("deck").asText().replaceAll("\\.cir$", ".raw"));
+        Path raw = PointRunner.rawFileOf(Path.of(record.get("deck").asText()));
         RawPlot plot = RawFileReader.read(raw).get(0);
         double[] time = plot.column("time").orElseThrow();
         double[] v = plot.column("v(" + driverNodeOf(plot) + ")").orElseThrow();
@@ -121,7 +122,7 @@ class PhysicsThroughNgspiceTests {
     }
 
     private static String nodeOf(JsonNode record) {
-        Path raw = Path.of(record.get("deck").asText().replaceAll("\\.cir$", ".raw"));
+        Path raw = PointRunner.rawFileOf(Path.of(record.get("deck").asText()));
         RawPlot plot = RawFileReader.read(raw).get(0);
         return plot.variables().stream().filter(n -> n.startsWith("v(u2")).findFirst()
                 .map(n -> n.substring(2, n.length() - 1)).orElseThrow();
