@@ -1,0 +1,92 @@
+package org.ringsweep.examples;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.ringsweep.runner.cli.Main;
+import org.ringsweep.runner.testing.Ngspice;
+
+/** The demo board through {@code ringsweep demo}: the README's first command. */
+class DemoBoardTests {
+    private static final Path BOARD = Path.of("demo-board", "nets");
+
+    @TempDir
+    static Path out;
+    private static List<JsonNode> records;
+    private static final StringWriter STDOUT = new StringWriter();
+
+    /** Runs the demo once for all tests of this class. */
+    private static synchronized List<JsonNode> runDemo(StringWriter ignored) throws Exception {
+        if (records == null) {
+            records = runDemoOnce(STDOUT);
+        }
+        return records;
+    }
+
+    private static List<JsonNode> runDemoOnce(StringWriter stdout) throws Exception {
+        StringWriter err = new StringWriter();
+        int code = Main.run(new String[] {"demo", "--board", BOARD.toString(), "--out", out.toString()},
+                new PrintWriter(stdout), new PrintWriter(err));
+        assertEquals(0, code, () -> stdout + "\n" + err);
+        List<JsonNode> list = new ArrayList<>();
+        ObjectMapper json = new ObjectMapper();
+        for (String line : Files.readAllLines(out.resolve("results.jsonl"))) {
+            list.add(json.readTree(line));
+        }
+        return list;
+    }
+
+    @Test
+    void demoRunsEveryNetAndCornerAndOnlyTheUnterminatedSyncNetFails() throws Exception {
+        Ngspice.require();
+        List<JsonNode> records = runDemo(null);
+        StringWriter stdout = STDOUT;
+        // 6 nets; SPI0_SCK and SPI0_MOSI have two corners each besides typ: 6 + 2 + 2 points.
+        assertEquals(10, records.size(), stdout.toString());
+        for (JsonNode r : records) {
+            String expected = r.get("net").asText().equals("SYNC_OUT_REVA") ? "fail" : "pass";
+            assertEquals(expected, r.get("verdict").asText(), r.toString());
+        }
+        assertTrue(stdout.toString().contains("Demo results are under"), stdout.toString());
+        assertTrue(stdout.toString().contains("Caution"), "the caution is printed");
+    }
+
+    @Test
+    void unterminatedSyncNetOvershootsAsTheLatticeDiagramPredicts() throws Exception {
+        Ngspice.require();
+        JsonNode reva = runDemo(null).stream()
+                .filter(r -> r.get("net").asText().equals("SYNC_OUT_REVA")).findFirst().orElseThrow();
+        JsonNode rise = reva.get("receivers").get(0).get("rise");
+        // lines-and-terminations.md §2: far-end first arrival 2·Vs·Z0/(Rs + Z0) = 2·3.3·50/62 = 5.3226 V
+        // (the ramp, 1.25 ns full, is shorter than the round trip 2·0.737 ns, so the plateau is reached);
+        // the 5 pF input rounds the edge, hence a 0.1 V tolerance.
+        assertEquals(5.3226 - 3.3, rise.get("overshoot_v").asDouble(), 0.1);
+        boolean overshootViolated = false;
+        for (JsonNode v : reva.get("receivers").get(0).get("violations")) {
+            overshootViolated |= v.get("limit").asText().equals("overshoot_max");
+        }
+        assertTrue(overshootViolated, reva.toString());
+    }
+
+    @Test
+    void seriesTerminationBySeriesRuleKeepsTheSyncNetWithinFivePercent() throws Exception {
+        Ngspice.require();
+        JsonNode revb = runDemo(null).stream()
+                .filter(r -> r.get("net").asText().equals("SYNC_OUT_REVB")).findFirst().orElseThrow();
+        JsonNode rise = revb.get("receivers").get(0).get("rise");
+        // Series termination R = Z0 − r_out (Johnson & Graham ch. 6; lines-and-terminations.md §4):
+        // 39 ohm + 12 ohm ≈ 50 ohm leaves only a small excursion; 5 % of the 3.3 V swing as a bound.
+        assertTrue(rise.get("overshoot_v").asDouble() < 0.05 * 3.3, rise.toString());
+        assertEquals(1, rise.get("crossings").asInt());
+    }
+}
