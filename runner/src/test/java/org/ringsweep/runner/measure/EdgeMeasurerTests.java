@@ -361,6 +361,12 @@ class EdgeMeasurerTests {
         assertThrows(IllegalArgumentException.class, () -> new Levels(0, Double.NaN, 0.8, 2.0, 0.066, 0));
     }
 
+    @Test
+    void defaultHysteresisIsOnePercentOfTheSwing() {
+        // waveform-metrics.md §4.3: typical h = 1-2 % of A; we take 1 %: 33 mV on a 3.3 V swing
+        assertEquals(0.033, Levels.of(0, 3.3, 0.8, 2.0, 0.165).hysteresis(), 1e-15);
+    }
+
     private static double ramp(double t) {
         if (t <= 1 * NS) {
             return 0;

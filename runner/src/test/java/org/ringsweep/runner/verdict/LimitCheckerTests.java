@@ -104,6 +104,15 @@ class LimitCheckerTests {
     }
 
     @Test
+    void aRisingEdgeThatStartsAboveVihCannotClockTheReceiver() {
+        // hand-made: the previous fall never got below 2.5 V, so this rise starts above VIH 2.0 V
+        List<Violation> v = check(RISE, ns(0, 1, 2, 20), new double[] {2.5, 2.5, 3.3, 3.3}, DEFAULTS);
+        assertEquals(List.of("threshold_not_reached"), keys(v));
+        assertEquals("rising edge starts at 2.50 V, already at or above VIH (2.00 V), so the receiver sees no rising"
+                + " crossing", v.get(0).message());
+    }
+
+    @Test
     void aDoubleClockFailsOneCrossingAndPassesTwo() {
         EffectiveLimits lenient = limits(Map.of(LimitName.RINGBACK_MARGIN_MIN, Value.of(-1, Dimension.VOLTAGE)));
         // waveform-metrics.md §5 W2: VIH is crossed rising twice (2.606061 and 4.032258 ns)
