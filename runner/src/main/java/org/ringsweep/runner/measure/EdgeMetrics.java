@@ -64,8 +64,8 @@ import org.ringsweep.api.net.Stimulus;
  *                               ended on the wrong side of where it started
  * @param settleBandV            the settling band's half-width used (V)
  * @param settleInstantS         where the wave enters {@code [vFinal ± settleBandV]} for the last
- *                               time (s), interpolated ({@code waveform-metrics.md} §4.7); NaN if
- *                               not settled
+ *                               time (s), interpolated ({@code waveform-metrics.md} §4.7); the
+ *                               window start if the wave never leaves the band; NaN if not settled
  * @param settleS                {@code settleInstantS − source50} (s); NaN if not settled
  * @param settled                whether the wave stays inside the band over at least the last 20 %
  *                               of the window (see {@link EdgeMeasurer})

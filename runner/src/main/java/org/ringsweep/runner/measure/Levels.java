@@ -17,6 +17,12 @@ package org.ringsweep.runner.measure;
  */
 public record Levels(double lowRail, double highRail, double vil, double vih, double settleBand, double hysteresis) {
     /**
+     * The hysteresis {@link #of} uses, as a fraction of the swing: 1 %, the low end of the
+     * "typical h = 1–2 % of A" of {@code waveform-metrics.md} §4.3.
+     */
+    public static final double DEFAULT_HYSTERESIS_FRACTION = 0.01;
+
+    /**
      * Checks the levels.
      *
      * @throws IllegalArgumentException if a level is not finite, the high rail is not above the
@@ -42,6 +48,21 @@ public record Levels(double lowRail, double highRail, double vil, double vih, do
         if (hysteresis < 0) {
             throw new IllegalArgumentException("hysteresis must not be negative, found " + hysteresis + " V");
         }
+    }
+
+    /**
+     * Levels with the default hysteresis, {@link #DEFAULT_HYSTERESIS_FRACTION} of the swing.
+     *
+     * @param lowRail    the driver's low level (V)
+     * @param highRail   the driver's high level (V)
+     * @param vil        the receiver's VIL (V)
+     * @param vih        the receiver's VIH (V)
+     * @param settleBand the settling band's half-width (V), e.g. {@code EffectiveLimits.settleBandV()}
+     * @return the levels
+     * @throws IllegalArgumentException as the canonical constructor
+     */
+    public static Levels of(double lowRail, double highRail, double vil, double vih, double settleBand) {
+        return new Levels(lowRail, highRail, vil, vih, settleBand, DEFAULT_HYSTERESIS_FRACTION * (highRail - lowRail));
     }
 
     /** The swing {@code highRail − lowRail} (V). */
