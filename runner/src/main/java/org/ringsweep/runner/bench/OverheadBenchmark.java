@@ -19,6 +19,8 @@ import org.ringsweep.runner.cli.Main;
  * {@code ngspice -n -b} one after another. Goal: check ≤ 1.10 × bare.
  */
 public final class OverheadBenchmark {
+    private static final int ROUNDS = 3;
+
     private OverheadBenchmark() {
     }
 
@@ -40,28 +42,44 @@ public final class OverheadBenchmark {
                 Files.writeString(f, netText(i), StandardCharsets.UTF_8);
                 args.add(f.toString());
             }
-            // One untimed warm-up of the JVM path on a few nets.
-            quietCheck(List.of("check", "--quiet", "--out", workDir.resolve("warm").toString(), args.get(4), args.get(5)));
-            long t0 = System.nanoTime();
-            int code = quietCheck(args);
-            double checkSeconds = (System.nanoTime() - t0) / 1e9;
-            List<Path> decks;
-            try (Stream<Path> s = Files.walk(workDir.resolve("out"))) {
-                decks = s.filter(p -> p.toString().endsWith(".cir")).sorted().toList();
+            // Rounds alternate check and bare ngspice so both see the same machine state; the best of
+            // each is compared, and the first (cold JVM) check is reported too.
+            double bestCheck = Double.MAX_VALUE;
+            double bestBare = Double.MAX_VALUE;
+            double coldCheck = 0;
+            int decks = 0;
+            int code = -1;
+            for (int round = 0; round < ROUNDS; round++) {
+                Path out = workDir.resolve("out-" + round);
+                List<String> roundArgs = new ArrayList<>(args);
+                roundArgs.set(3, out.toString());
+                long t0 = System.nanoTime();
+                code = quietCheck(roundArgs);
+                double checkSeconds = (System.nanoTime() - t0) / 1e9;
+                if (round == 0) {
+                    coldCheck = checkSeconds;
+                }
+                bestCheck = Math.min(bestCheck, checkSeconds);
+                List<Path> deckFiles;
+                try (Stream<Path> s = Files.walk(out)) {
+                    deckFiles = s.filter(p -> p.toString().endsWith(".cir")).sorted().toList();
+                }
+                decks = deckFiles.size();
+                long t1 = System.nanoTime();
+                for (Path deck : deckFiles) {
+                    Process p = new ProcessBuilder(ngspice.toString(), "-n", "-b", deck.getFileName().toString())
+                            .directory(deck.getParent().toFile())
+                            .redirectOutput(ProcessBuilder.Redirect.DISCARD)
+                            .redirectError(ProcessBuilder.Redirect.DISCARD)
+                            .start();
+                    p.waitFor();
+                }
+                bestBare = Math.min(bestBare, (System.nanoTime() - t1) / 1e9);
             }
-            long t1 = System.nanoTime();
-            for (Path deck : decks) {
-                Process p = new ProcessBuilder(ngspice.toString(), "-n", "-b", deck.getFileName().toString())
-                        .directory(deck.getParent().toFile())
-                        .redirectOutput(ProcessBuilder.Redirect.DISCARD)
-                        .redirectError(ProcessBuilder.Redirect.DISCARD)
-                        .start();
-                p.waitFor();
-            }
-            double bareSeconds = (System.nanoTime() - t1) / 1e9;
             return String.format(Locale.ROOT,
-                    "overhead: %d nets (%d decks), check %.2f s (exit %d), bare ngspice %.2f s, ratio %.3f (goal <= 1.10)",
-                    nets, decks.size(), checkSeconds, code, bareSeconds, checkSeconds / bareSeconds);
+                    "overhead: %d nets (%d decks), best of %d rounds: check %.2f s (exit %d), bare ngspice %.2f s, ratio %.3f"
+                            + " (goal <= 1.10); first check in a cold JVM %.2f s, ratio %.3f",
+                    nets, decks, ROUNDS, bestCheck, code, bestBare, bestCheck / bestBare, coldCheck, coldCheck / bestBare);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         } catch (InterruptedException e) {

@@ -28,6 +28,7 @@ public final class BenchCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         var out = spec.commandLine().getOut();
         Files.createDirectories(work);
+        Files.createDirectories(work.resolve("raw"));
         out.println(RawReaderBenchmark.run(work.resolve("raw")));
         out.flush();
         var located = NgspiceEngine.locate(System.getenv());
