@@ -81,13 +81,9 @@ public final class PointRunner {
     }
 
     /**
-     * Elaborates the point and writes its deck.
-     *
-     * @throws org.ringsweep.generators.elaborate.ElaborationException for input the model rejects
+     * Writes the deck of an elaborated point.
      */
-    public WrittenDeck writeDeck(Net net, PointSpec spec) {
-        Net applied = net.with(spec.overrides());
-        Elaboration elab = elaborator.elaborate(applied, label(spec));
+    public WrittenDeck writeDeck(Net net, PointSpec spec, Elaboration elab) {
         return writeDeck(net, elab, deckStem(spec), false);
     }
 
@@ -112,8 +108,17 @@ public final class PointRunner {
      * A point that still fails gives an error record quoting the engine; it never throws for that.
      */
     public ResultRecord run(Net net, PointSpec spec) {
+        return run(net, spec, elaborate(net, spec));
+    }
+
+    /** Elaborates a point (its overrides applied to the net). */
+    public Elaboration elaborate(Net net, PointSpec spec) {
+        return elaborator.elaborate(net.with(spec.overrides()), label(spec));
+    }
+
+    /** Runs a point already elaborated with {@link #elaborate}. */
+    public ResultRecord run(Net net, PointSpec spec, Elaboration elab) {
         Net applied = net.with(spec.overrides());
-        Elaboration elab = elaborator.elaborate(applied, label(spec));
         SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine for run()"));
         List<String> warnings = new ArrayList<>(elab.warnings());
         String stem = deckStem(spec);

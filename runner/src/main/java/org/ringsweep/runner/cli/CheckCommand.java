@@ -1,13 +1,8 @@
 package org.ringsweep.runner.cli;
 
-import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
@@ -22,18 +17,12 @@ public final class CheckCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
-    @Parameters(arity = "1..*", paramLabel = "NET.yaml", description = "Net files (ringsweep/net-1).")
-    List<Path> nets;
-
-    @Option(names = "--corners", description = "Also run every corner the net file defines (typ is always run).")
-    boolean corners;
-
-    @Option(names = "--set", paramLabel = "ID/param=value", description = "Override a value for every point, e.g. --set R5/value=33.")
-    List<String> sets = new ArrayList<>();
+    @Mixin
+    NetOptions selection;
 
     @Override
     public Integer call() {
         return new CheckFlow(common, spec.commandLine().getOut(), spec.commandLine().getErr())
-                .run(nets, corners, sets, true);
+                .run(selection.nets, selection.corners, selection.sets, true);
     }
 }

@@ -12,6 +12,7 @@ import org.ringsweep.api.net.Net;
 import org.ringsweep.api.net.NetValidationException;
 import org.ringsweep.api.net.Point;
 import org.ringsweep.generators.deck.DeckWriter;
+import org.ringsweep.generators.elaborate.Elaboration;
 import org.ringsweep.generators.elaborate.ElaborationException;
 import org.ringsweep.generators.elaborate.Elaborator;
 import org.ringsweep.generators.models.BuiltinModels;
@@ -59,7 +60,9 @@ final class CheckFlow {
         NetFileLoader loader = new NetFileLoader(catalog);
         PointParser points = new PointParser(catalog);
         Elaborator elaborator = new Elaborator();
+        Duration timeout = Duration.ofMillis(Math.round(common.timeoutSeconds * 1000));
         Map<Net, List<PointRunner.PointSpec>> plan = new LinkedHashMap<>();
+        Map<Net, Map<PointRunner.PointSpec, Elaboration>> elaborated = new java.util.IdentityHashMap<>();
         List<String> problems = new ArrayList<>();
         for (Path file : files) {
             try {
@@ -70,9 +73,12 @@ final class CheckFlow {
                 if (corners) {
                     net.corners().forEach((name, corner) -> specs.add(new PointRunner.PointSpec(name, corner.then(overrides), Map.of(), 1)));
                 }
+                PointRunner planner = new PointRunner(elaborator, null, Optional.empty(), common.out, timeout);
+                Map<PointRunner.PointSpec, Elaboration> byPoint = new java.util.HashMap<>();
                 for (PointRunner.PointSpec s : specs) {
-                    elaborator.elaborate(net.with(s.overrides()), s.corner()); // input check before anything runs
+                    byPoint.put(s, planner.elaborate(net, s)); // every input check before anything runs
                 }
+                elaborated.put(net, byPoint);
                 plan.put(net, specs);
             } catch (InputException | ElaborationException e) {
                 problems.add(e.getMessage());
@@ -107,12 +113,11 @@ final class CheckFlow {
                 return new Outcome(ExitCodes.SIMULATION, List.of());
             }
         }
-        Duration timeout = Duration.ofMillis(Math.round(common.timeoutSeconds * 1000));
         PointRunner runner = new PointRunner(elaborator, decks, engine, common.out, timeout);
         if (!simulate) {
             for (Map.Entry<Net, List<PointRunner.PointSpec>> e : plan.entrySet()) {
                 for (PointRunner.PointSpec s : e.getValue()) {
-                    out.println(runner.writeDeck(e.getKey(), s).deck());
+                    out.println(runner.writeDeck(e.getKey(), s, elaborated.get(e.getKey()).get(s)).deck());
                 }
             }
             return new Outcome(ExitCodes.OK, List.of());
@@ -123,7 +128,7 @@ final class CheckFlow {
                 for (PointRunner.PointSpec s : e.getValue()) {
                     ResultRecord r;
                     try {
-                        r = runner.run(e.getKey(), s);
+                        r = runner.run(e.getKey(), s, elaborated.get(e.getKey()).get(s));
                     } catch (RuntimeException ex) {
                         // A model or engine failure for this point: record it and go on.
                         r = runner.errorRecord(e.getKey(), s, String.valueOf(ex.getMessage()));

@@ -1,0 +1,112 @@
+package org.ringsweep.runner.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.io.File;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.ringsweep.runner.testing.Ngspice;
+
+/** The commands' contract (formats.md "Commands" and "Results"): outputs, files and exit codes. */
+class CliCommandTests {
+    @TempDir
+    Path out;
+
+    private static String net(String name) {
+        return CliRun.resource("physics/" + name).toString();
+    }
+
+    @Test
+    void jsonRecordCarriesTheFieldsOfTheResultContract() {
+        Ngspice.require();
+        CliRun run = CliRun.of("check", "--json", "--out", out.toString(), net("matched-series.yaml"));
+        assertEquals(ExitCodes.OK, run.exitCode(), run.err());
+        List<JsonNode> records = run.records();
+        assertEquals(1, records.size());
+        JsonNode r = records.get(0);
+        assertEquals("ringsweep/result-1", r.get("format").asText());
+        assertEquals("MATCHED_SERIES", r.get("net").asText());
+        assertEquals("typ", r.get("corner").asText());
+        assertTrue(r.get("point").isObject());
+        assertEquals("ngspice", r.get("engine").get("name").asText());
+        assertTrue(r.get("engine").get("version").asText().matches("\\d+(\\.\\d+)*"), r.toString());
+        assertEquals("pass", r.get("verdict").asText());
+        JsonNode rx = r.get("receivers").get(0);
+        assertEquals("U2.1", rx.get("pin").asText());
+        for (String key : List.of("v_max", "v_min", "v_final", "overshoot_v", "ringback_margin_v", "settle_s", "delay_s",
+                "crossings", "monotonic", "slew_v_per_s")) {
+            assertTrue(rx.get("rise").has(key), "rise." + key);
+        }
+        assertTrue(rx.get("fall").has("undershoot_v"));
+        assertTrue(rx.get("violations").isArray());
+        assertTrue(Files.exists(Path.of(r.get("deck").asText())), "deck path in the record exists");
+        // The same record goes to results.jsonl under --out.
+        assertTrue(Files.exists(out.resolve("results.jsonl")));
+    }
+
+    @Test
+    void failingNetExitsOneAndListsTheViolationInWordsWithoutColour() {
+        Ngspice.require();
+        CliRun run = CliRun.of("check", "--out", out.toString(), net("bounce-15ohm-open.yaml"));
+        assertEquals(ExitCodes.VIOLATION, run.exitCode(), run.err() + run.out());
+        assertTrue(run.out().contains("FAIL <<"), run.out());
+        assertTrue(run.out().contains("overshoots the high rail"), run.out());
+        assertFalse(run.out().contains("\u001b["), "no ANSI colour codes");
+        assertTrue(run.out().contains("Caution"), "the caution is printed");
+    }
+
+    @Test
+    void deckCommandWritesDecksOnlyUnderTheOutputFolder() throws Exception {
+        CliRun run = CliRun.of("deck", "--out", out.toString(), net("parallel-vtt.yaml"));
+        assertEquals(ExitCodes.OK, run.exitCode(), run.err());
+        Path deck = Path.of(run.out().strip());
+        assertTrue(deck.startsWith(out) && Files.exists(deck), run.out());
+        assertFalse(Files.exists(out.resolve("results.jsonl")), "nothing simulated");
+        try (var s = Files.walk(out)) {
+            assertEquals(1, s.filter(Files::isRegularFile).count(), "only the deck");
+        }
+    }
+
+    @Test
+    void setOverridesAValueInTheDeck() throws Exception {
+        CliRun run = CliRun.of("deck", "--out", out.toString(), "--set", "R1/value=4k7", net("matched-series.yaml"));
+        assertEquals(ExitCodes.OK, run.exitCode(), run.err());
+        String deck = Files.readString(Path.of(run.out().strip()));
+        // IEC 60062: 4k7 = 4700 ohm; decks carry plain numbers only (ngspice would read 4k7 as 4000, ngspice.md §6).
+        assertTrue(deck.contains(" 4.7e+03"), deck);
+    }
+
+    @Test
+    void modelsListsTheBuiltInModelsWithUnits() {
+        CliRun run = CliRun.of("models");
+        assertEquals(ExitCodes.OK, run.exitCode());
+        assertTrue(run.out().contains("driver ramp"), run.out());
+        assertTrue(run.out().contains("receiver cmos"), run.out());
+        assertTrue(run.out().contains("r_out") && run.out().contains("ohm"), run.out());
+    }
+
+    @Test
+    void noEngineFoundExitsThreeWithAHint() throws Exception {
+        // A child JVM whose PATH has no ngspice and no RINGSWEEP_NGSPICE.
+        ProcessBuilder pb = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), Main.class.getName(),
+                "check", "--out", out.toString(), net("matched-series.yaml"));
+        pb.environment().put("PATH", out.toString());
+        pb.environment().remove("RINGSWEEP_NGSPICE");
+        pb.redirectErrorStream(true);
+        File log = out.resolve("log.txt").toFile();
+        pb.redirectOutput(log);
+        Process p = pb.start();
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        String text = Files.readString(log.toPath());
+        assertEquals(ExitCodes.SIMULATION, p.exitValue(), text);
+        assertTrue(text.contains("ngspice"), text);
+    }
+}
