@@ -124,7 +124,8 @@ public final class PointRunner {
         String stem = deckStem(spec);
         WrittenDeck written = writeDeck(net, elab, stem, false);
         SimulationOutcome outcome = eng.run(job(written, stem, elab));
-        if (outcome instanceof SimulationOutcome.Failure first && isRetryable(first.kind())) {
+        // An interrupted run (Ctrl-C, a stopping batch) is not retried: its record is discarded anyway.
+        if (outcome instanceof SimulationOutcome.Failure first && isRetryable(first.kind()) && !Thread.currentThread().isInterrupted()) {
             String retryStem = stem + "-conservative";
             written = writeDeck(net, elab, retryStem, true);
             outcome = eng.run(job(written, retryStem, elab));
