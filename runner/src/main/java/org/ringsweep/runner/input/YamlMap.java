@@ -16,9 +16,10 @@ import org.yaml.snakeyaml.nodes.Tag;
 /**
  * A YAML mapping of one input file, seen with its key path: typed access to its entries that
  * fails with an {@link InputException} naming file, line, column, key and what was expected.
- * Rejects duplicate keys and non-scalar keys when made.
+ * Rejects duplicate keys and non-scalar keys when made. Public so that other input readers (the
+ * sweep file) report problems the same way.
  */
-final class YamlMap {
+public final class YamlMap {
     private final String file;
     private final MappingNode node;
     private final String path;
@@ -46,7 +47,7 @@ final class YamlMap {
      * @param what what the key expects, for the message ("a map such as `{ VCC: 3.3 }`")
      * @throws InputException if {@code n} is not a mapping
      */
-    static YamlMap of(String file, Node n, String path, String what) {
+    public static YamlMap of(String file, Node n, String path, String what) {
         if (n instanceof MappingNode m) {
             return new YamlMap(file, m, path);
         }
@@ -54,17 +55,17 @@ final class YamlMap {
     }
 
     /** Where a node starts (1-based line and column). */
-    static Location location(String file, Node n) {
+    public static Location location(String file, Node n) {
         return new Location(file, n.getStartMark().getLine() + 1, n.getStartMark().getColumn() + 1);
     }
 
     /** {@code parent.key}, or {@code key} at the top. */
-    static String join(String parent, String key) {
+    public static String join(String parent, String key) {
         return parent.isEmpty() ? key : parent + "." + key;
     }
 
     /** "a list", "a map", "nothing" or the quoted text, for messages. */
-    static String describe(Node n) {
+    public static String describe(Node n) {
         if (n instanceof SequenceNode) {
             return "a list";
         } else if (n instanceof MappingNode) {
@@ -74,41 +75,43 @@ final class YamlMap {
         return s.getTag().equals(Tag.NULL) && s.getValue().isEmpty() || s.getValue().isBlank() ? "nothing" : "`" + s.getValue() + "`";
     }
 
-    String file() {
+    /** The file label used in messages. */
+    public String file() {
         return file;
     }
 
     /** This map's key path. */
-    String path() {
+    public String path() {
         return path;
     }
 
     /** Where this map starts. */
-    Location location() {
+    public Location location() {
         return location(file, node);
     }
 
     /** The key path of one of its keys. */
-    String path(String key) {
+    public String path(String key) {
         return join(path, key);
     }
 
     /** The keys in file order. */
-    Collection<String> keys() {
+    public Collection<String> keys() {
         return entries.keySet();
     }
 
-    boolean has(String key) {
+    /** Whether the map has {@code key}. */
+    public boolean has(String key) {
         return entries.containsKey(key);
     }
 
     /** The value under {@code key}, if present. */
-    Optional<Node> get(String key) {
+    public Optional<Node> get(String key) {
         return Optional.ofNullable(entries.get(key)).map(NodeTuple::getValueNode);
     }
 
     /** The key node itself, for errors about the key. */
-    Node keyNode(String key) {
+    public Node keyNode(String key) {
         return entries.get(key).getKeyNode();
     }
 
@@ -118,7 +121,7 @@ final class YamlMap {
      * @param what what the key expects ("a point such as `U1.14`")
      * @throws InputException at this map when the key is missing
      */
-    Node require(String key, String what) {
+    public Node require(String key, String what) {
         return get(key).orElseThrow(() -> new InputException(location(), path(key), "missing `" + key + "`; expected " + what));
     }
 
@@ -127,7 +130,7 @@ final class YamlMap {
      *
      * @param what what this map is ("a segment")
      */
-    void allowOnly(List<String> allowed, String what) {
+    public void allowOnly(List<String> allowed, String what) {
         for (String k : entries.keySet()) {
             if (!allowed.contains(k)) {
                 throw new InputException(location(file, keyNode(k)), path(k),
@@ -142,12 +145,12 @@ final class YamlMap {
      * @param what what the key expects
      * @throws InputException when the value is a list or map, or empty
      */
-    String text(String key, String what) {
+    public String text(String key, String what) {
         return scalar(file, require(key, what), path(key), what);
     }
 
     /** The text of a scalar node, not empty. */
-    static String scalar(String file, Node n, String path, String what) {
+    public static String scalar(String file, Node n, String path, String what) {
         if (n instanceof ScalarNode s && !s.getValue().isBlank()) {
             return s.getValue().strip();
         }
@@ -155,7 +158,7 @@ final class YamlMap {
     }
 
     /** The text of a scalar node, possibly empty (null becomes empty). */
-    static String scalarOrEmpty(String file, Node n, String path, String what) {
+    public static String scalarOrEmpty(String file, Node n, String path, String what) {
         if (n instanceof ScalarNode s) {
             return s.getValue().strip();
         }
@@ -163,7 +166,7 @@ final class YamlMap {
     }
 
     /** The items of a list value. */
-    static List<Node> list(String file, Node n, String path, String what) {
+    public static List<Node> list(String file, Node n, String path, String what) {
         if (n instanceof SequenceNode s) {
             return s.getValue();
         }
