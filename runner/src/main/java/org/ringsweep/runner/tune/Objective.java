@@ -13,16 +13,30 @@ import org.ringsweep.runner.results.Verdict;
  * or {@code undershoot_v} of any falling edge over all receivers), then the shortest settling
  * (the longest {@code settle_s} over all receivers and edges; not settled counts as infinite).
  * Error points rank last. Ties keep the earlier point (callers sort stably).
+ *
+ * <p>Design choices: an excursion that stays inside the rails counts as zero (a wave that only
+ * approaches the rail is not better for approaching it more slowly), and excursions are compared
+ * in steps of {@link #EXCURSION_STEP_V} so that a fraction of a millivolt does not outweigh a
+ * much shorter settle.
  */
 public final class Objective {
     /** A one-line description for records and reports. */
     public static final String DESCRIPTION = "passes every limit, then smallest worst excursion beyond the rails, then shortest settle";
 
+    /** Resolution of the excursion comparison: 10 mV (V). */
+    public static final double EXCURSION_STEP_V = 0.010;
+
     /** Orders records from best to worst. */
     public static final Comparator<ResultRecord> BEST_FIRST = Comparator
             .comparingInt((ResultRecord r) -> rank(r.verdict()))
-            .thenComparingDouble(Objective::worstExcursion)
+            .thenComparingDouble(Objective::excursionSteps)
             .thenComparingDouble(Objective::longestSettle);
+
+    /** The worst excursion beyond the rails, none counting as 0, in whole steps of 10 mV (rounded up). */
+    static double excursionSteps(ResultRecord r) {
+        double x = worstExcursion(r);
+        return Double.isInfinite(x) ? x : Math.ceil(Math.max(0, x) / EXCURSION_STEP_V - 1e-9);
+    }
 
     private Objective() {
     }
