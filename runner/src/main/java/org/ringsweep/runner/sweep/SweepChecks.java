@@ -19,7 +19,12 @@ final class SweepChecks {
 
     /** The value of a plain number written without a unit ({@code 10}, {@code 1e-9}), if it is one. */
     static Optional<Double> plain(String text) {
-        return PLAIN_NUMBER.matcher(text).matches() ? Optional.of(new BigDecimal(text).doubleValue()) : Optional.empty();
+        if (!PLAIN_NUMBER.matcher(text).matches()) {
+            return Optional.empty();
+        }
+        double v = new BigDecimal(text).doubleValue();
+        // an overflowing number is left to the planner, whose quantity parser reports it
+        return Double.isFinite(v) ? Optional.of(v) : Optional.empty();
     }
 
     /**

@@ -266,6 +266,19 @@ class SweepPlannerTests {
     }
 
     @Test
+    void zipKeepsPairingTheEntriesANetHas() {
+        SweepFile s = sweep(
+                "  - { target: R5/value, values: [10, 22] }",
+                "  - { target: R7/value, values: [33, 47] }",
+                "  - { target: U3.2/rise, values: [1ns, 2ns] }",
+                "combine: zip");
+        SweepPlanner.Plan p = planner.plan(s, reset, parser);
+        assertEquals(List.of(33.0, 47.0), swept(p, "R7/value"));
+        assertEquals(List.of(1e-9, 2e-9), swept(p, "U3.2/rise"));
+        assertEquals(1, p.warnings().size());
+    }
+
+    @Test
     void moreThanTheAllowedPointsIsAnError() {
         SweepFile s = sweep(
                 "  - { target: R5/value, from: 1, to: 100, steps: 100 }",
