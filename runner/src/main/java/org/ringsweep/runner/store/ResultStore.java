@@ -13,7 +13,8 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.sql.Types;
 import java.time.Instant;
-import java.time.temporal.ChronoUnit;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.HashMap;
@@ -53,6 +54,9 @@ public final class ResultStore implements AutoCloseable {
     public static final int SCHEMA_VERSION = 1;
 
     private static final ObjectMapper MAPPER = new ObjectMapper();
+    /** ISO-8601 UTC with milliseconds, fixed width, so the text sorts as the time does. */
+    private static final DateTimeFormatter FINISHED_AT =
+            DateTimeFormatter.ofPattern("uuuu-MM-dd'T'HH:mm:ss.SSS'Z'", Locale.ROOT).withZone(ZoneOffset.UTC);
 
     /** The schema, as documented in {@code docs/results-store.md}. */
     static final List<String> SCHEMA = List.of(
@@ -231,7 +235,7 @@ public final class ResultStore implements AutoCloseable {
         }
         String json = ResultJson.line(r); // outside the lock: the JSON is the costly part
         PointSummary s = PointSummary.of(r);
-        String finishedAt = Instant.now().truncatedTo(ChronoUnit.MILLIS).toString();
+        String finishedAt = FINISHED_AT.format(Instant.now());
         synchronized (this) {
             ensureOpen();
             try {

@@ -184,6 +184,24 @@ class ResultStoreTests {
     }
 
     @Test
+    void finishedAtIsTheCommitTimeAsIso8601Utc() throws Exception {
+        try (ResultStore store = ResultStore.open(out)) {
+            java.time.Instant before = java.time.Instant.now().truncatedTo(java.time.temporal.ChronoUnit.MILLIS);
+            ResultRecord r = Records.numbered(1);
+            store.put(r, PointKey.of(r));
+            java.time.Instant after = java.time.Instant.now();
+            java.time.Instant at = store.rows().get(0).finishedAt();
+            assertTrue(!at.isBefore(before) && !at.isAfter(after), at + " not in [" + before + ", " + after + "]");
+            try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + store.file());
+                 Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT finished_at FROM points")) {
+                assertTrue(rs.next());
+                // ISO 8601 extended format, UTC designator Z, milliseconds.
+                assertTrue(rs.getString(1).matches("\\d{4}-\\d{2}-\\d{2}T\\d{2}:\\d{2}:\\d{2}\\.\\d{3}Z"), rs.getString(1));
+            }
+        }
+    }
+
+    @Test
     void aNewerSchemaVersionIsRefusedWithTheFileNamed() throws Exception {
         ResultStore.open(out).close();
         try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + out.resolve(ResultStore.FILE_NAME));
