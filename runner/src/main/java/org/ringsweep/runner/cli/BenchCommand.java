@@ -31,6 +31,8 @@ public final class BenchCommand implements Callable<Integer> {
         Files.createDirectories(work.resolve("raw"));
         out.println(RawReaderBenchmark.run(work.resolve("raw")));
         out.flush();
+        out.println(org.ringsweep.runner.bench.StoreBenchmark.run(work.resolve("store")));
+        out.flush();
         var located = NgspiceEngine.locate(System.getenv());
         if (located.isEmpty()) {
             out.println("overhead: skipped, ngspice not found");

@@ -5,14 +5,16 @@ import java.util.Iterator;
 import java.util.Map;
 import java.util.TreeMap;
 import org.ringsweep.runner.results.Verdict;
+import org.ringsweep.runner.tune.Objective;
 
 /**
- * The default objective of "best point per net", in ranking order:
+ * The default objective of "best point per net" ({@link Objective}, here over stored rows), in ranking order:
  * <ol>
  *   <li>a point that passes every limit before one that fails some (error points are never best);</li>
  *   <li>the smaller worst excursion beyond the rails ({@code worst_excursion_v}: the max of
  *       {@code overshoot_v} over rising edges and {@code undershoot_v} over falling edges, all
- *       receivers);</li>
+ *       receivers), counted as {@link Objective#excursionSteps(double)} does: none counts as 0,
+ *       compared in 10 mV steps;</li>
  *   <li>the shorter longest settling time ({@code longest_settle_s});</li>
  *   <li>point order: corner name, then the swept values as a sequence of (path, value) pairs in
  *       ascending path order, paths by name and values as numbers (a sequence that is a prefix
@@ -25,7 +27,7 @@ final class BestPoint {
     /** Best first. */
     static final Comparator<StoredRow> ORDER = Comparator
             .comparingInt((StoredRow r) -> r.verdict() == Verdict.PASS ? 0 : 1)
-            .thenComparing(StoredRow::worstExcursionV, BestPoint::knownFirst)
+            .thenComparing((StoredRow r) -> Objective.excursionSteps(r.worstExcursionV()), BestPoint::knownFirst)
             .thenComparing(StoredRow::longestSettleS, BestPoint::knownFirst)
             .thenComparing(BestPoint::pointOrder);
 

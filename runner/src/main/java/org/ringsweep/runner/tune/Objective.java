@@ -34,8 +34,18 @@ public final class Objective {
 
     /** The worst excursion beyond the rails, none counting as 0, in whole steps of 10 mV (rounded up). */
     static double excursionSteps(ResultRecord r) {
-        double x = worstExcursion(r);
-        return Double.isInfinite(x) ? x : Math.ceil(Math.max(0, x) / EXCURSION_STEP_V - 1e-9);
+        return excursionSteps(worstExcursion(r));
+    }
+
+    /**
+     * An excursion (V) as the objective compares it: none (negative) counts as 0, then whole steps
+     * of {@link #EXCURSION_STEP_V}, rounded up; NaN and infinities are kept.
+     */
+    public static double excursionSteps(double worstExcursionV) {
+        if (!Double.isFinite(worstExcursionV)) {
+            return worstExcursionV;
+        }
+        return Math.ceil(Math.max(0, worstExcursionV) / EXCURSION_STEP_V - 1e-9);
     }
 
     private Objective() {

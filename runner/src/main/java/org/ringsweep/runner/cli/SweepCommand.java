@@ -1,0 +1,242 @@
+package org.ringsweep.runner.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.concurrent.Callable;
+import org.ringsweep.api.net.Net;
+import org.ringsweep.api.net.NetValidationException;
+import org.ringsweep.generators.deck.DeckWriter;
+import org.ringsweep.generators.elaborate.ElaborationException;
+import org.ringsweep.generators.elaborate.Elaborator;
+import org.ringsweep.generators.models.BuiltinModels;
+import org.ringsweep.runner.batch.BatchRunner;
+import org.ringsweep.runner.batch.Progress;
+import org.ringsweep.runner.check.Caution;
+import org.ringsweep.runner.check.PointRunner;
+import org.ringsweep.runner.engine.EngineChoice;
+import org.ringsweep.runner.engine.EngineNotFoundException;
+import org.ringsweep.runner.engine.EngineSelector;
+import org.ringsweep.runner.engine.SimulationEngine;
+import org.ringsweep.runner.input.InputException;
+import org.ringsweep.runner.input.NetFileLoader;
+import org.ringsweep.runner.input.PointParser;
+import org.ringsweep.runner.results.Verdict;
+import org.ringsweep.runner.store.PointKey;
+import org.ringsweep.runner.store.ResultStore;
+import org.ringsweep.runner.store.StoreExport;
+import org.ringsweep.runner.store.StoredRow;
+import org.ringsweep.runner.sweep.SweepFile;
+import org.ringsweep.runner.sweep.SweepFileLoader;
+import org.ringsweep.runner.sweep.SweepPlanner;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/**
+ * {@code ringsweep sweep SWEEP.yaml [--jobs N] [--resume]}: run every point of a sweep into the
+ * results store under {@code --out}, each committed as it finishes.
+ */
+@Command(name = "sweep", mixinStandardHelpOptions = true,
+        description = {"Run a sweep (ringsweep/sweep-1) over its nets into the results store OUT/results.sqlite.",
+                "Each finished point is committed at once; --resume re-runs only the unfinished points."})
+public final class SweepCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Mixin
+    CommonOptions common;
+
+    @Parameters(index = "0", paramLabel = "SWEEP.yaml", description = "The sweep file.")
+    Path sweepFile;
+
+    @Option(names = "--jobs", paramLabel = "N", description = "Parallel simulations (default: the number of cores).")
+    Integer jobs;
+
+    @Option(names = "--resume", description = "Continue the sweep stored under --out: run only the points not yet finished.")
+    boolean resume;
+
+    @Override
+    public Integer call() throws InterruptedException {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        BuiltinModels catalog = new BuiltinModels();
+        PointParser parser = new PointParser(catalog);
+        Elaborator elaborator = new Elaborator();
+        int workers = jobs == null ? Runtime.getRuntime().availableProcessors() : jobs;
+        if (workers < 1) {
+            err.println("ringsweep: sweep: --jobs: expected at least 1, found " + workers);
+            return ExitCodes.INPUT;
+        }
+        Duration timeout = Duration.ofMillis(Math.round(common.timeoutSeconds * 1000));
+        List<SweepPlanner.Plan> plans = new ArrayList<>();
+        List<String> warnings = new ArrayList<>();
+        try {
+            SweepFile sweep = new SweepFileLoader().load(sweepFile);
+            NetFileLoader loader = new NetFileLoader(catalog);
+            PointRunner checker = new PointRunner(elaborator, null, Optional.empty(), common.out, timeout);
+            SweepPlanner planner = new SweepPlanner();
+            for (Path netFile : sweep.nets()) {
+                Net net = loader.load(netFile);
+                SweepPlanner.Plan plan = planner.plan(sweep, net, parser);
+                if (!plan.points().isEmpty()) {
+                    checker.elaborate(net, plan.points().get(0)); // the net's models accept its values
+                }
+                plans.add(plan);
+                warnings.addAll(plan.warnings());
+            }
+        } catch (InputException | ElaborationException e) {
+            err.println("ringsweep: " + e.getMessage());
+            return ExitCodes.INPUT;
+        } catch (NetValidationException e) {
+            err.println("ringsweep: " + e.location() + ": " + e.getMessage());
+            return ExitCodes.INPUT;
+        }
+        warnings.forEach(w -> err.println("ringsweep: warning: " + w));
+        SimulationEngine engine;
+        try {
+            engine = EngineSelector.select(EngineChoice.parse(common.engine), System.getenv());
+        } catch (IllegalArgumentException e) {
+            err.println("ringsweep: --engine: " + e.getMessage());
+            return ExitCodes.INPUT;
+        } catch (EngineNotFoundException e) {
+            err.println("ringsweep: " + e.getMessage());
+            return ExitCodes.SIMULATION;
+        }
+        boolean existed = Files.exists(common.out.resolve(ResultStore.FILE_NAME));
+        try (ResultStore store = ResultStore.open(common.out)) {
+            if (existed && !resume && !store.rows().isEmpty()) {
+                err.println("ringsweep: sweep: " + store.file() + " already holds results; give --resume to continue"
+                        + " that sweep, or another --out");
+                return ExitCodes.INPUT;
+            }
+            List<BatchRunner.Task> tasks = new ArrayList<>();
+            int skipped = 0;
+            if (!common.quiet) {
+                out.println("Plan: " + plans.size() + " net(s)");
+            }
+            for (SweepPlanner.Plan plan : plans) {
+                Set<String> finished = resume ? store.finishedKeys(plan.net().sourceHash()) : Set.of();
+                int todo = 0;
+                for (PointRunner.PointSpec p : plan.points()) {
+                    String key = PointKey.of(p.corner(), p.swept());
+                    if (finished.contains(key)) {
+                        skipped++;
+                    } else {
+                        tasks.add(new BatchRunner.Task(plan.net(), p, key));
+                        todo++;
+                    }
+                }
+                if (!common.quiet) {
+                    out.printf(Locale.ROOT, "  %-24s %6d point(s)%s%n", plan.net().name(), plan.points().size(),
+                            resume ? " (" + todo + " to run)" : "");
+                }
+            }
+            if (!common.quiet) {
+                out.printf(Locale.ROOT, "  total %d point(s), %d to run with %d job(s)%s%n", tasks.size() + skipped, tasks.size(), workers,
+                        skipped > 0 ? ", " + skipped + " already finished" : "");
+                out.flush();
+            }
+            DeckWriter decks = common.templates == null ? new DeckWriter() : DeckWriter.withTemplateDir(common.templates);
+            PointRunner runner = new PointRunner(elaborator, decks, Optional.of(engine), common.out, timeout);
+            BatchRunner batch = new BatchRunner(runner, workers);
+            Thread hook = new Thread(batch::stop, "ringsweep-stop");
+            Runtime.getRuntime().addShutdownHook(hook);
+            Progress progress = new Progress(err, tasks.size(), System.console() != null, common.quiet, Duration.ofSeconds(10), System::nanoTime);
+            try {
+                batch.run(tasks, (task, record) -> store.put(record, task.pointKey()), progress);
+            } finally {
+                try {
+                    Runtime.getRuntime().removeShutdownHook(hook);
+                } catch (IllegalStateException shuttingDown) {
+                    // the hook is running: Ctrl-C
+                }
+            }
+            List<StoredRow> rows = store.rows();
+            writeJsonLines(rows);
+            if (!common.quiet) {
+                summary(store, plans, out);
+            }
+            return exitCode(rows, plans);
+        }
+    }
+
+    /** results.jsonl beside the store: every record, for tools that read JSON Lines. */
+    private void writeJsonLines(List<StoredRow> rows) {
+        StringBuilder b = new StringBuilder();
+        StoreExport.toJsonLines(rows, b);
+        try {
+            Files.writeString(common.out.resolve("results.jsonl"), b, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + common.out.resolve("results.jsonl") + ": " + e.getMessage(), e);
+        }
+    }
+
+    private static int exitCode(List<StoredRow> rows, List<SweepPlanner.Plan> plans) {
+        Set<String> hashes = new java.util.HashSet<>();
+        plans.forEach(p -> hashes.add(p.net().sourceHash()));
+        Verdict worst = Verdict.PASS;
+        for (StoredRow r : rows) {
+            if (hashes.contains(r.netHash())) {
+                worst = worst.worst(r.verdict());
+            }
+        }
+        return switch (worst) {
+            case PASS -> ExitCodes.OK;
+            case FAIL -> ExitCodes.VIOLATION;
+            case ERROR -> ExitCodes.SIMULATION;
+        };
+    }
+
+    /** Per net: pass/fail/error counts, the best point by the default objective, and each point's key metrics. */
+    private static void summary(ResultStore store, List<SweepPlanner.Plan> plans, PrintWriter out) {
+        Map<String, StoredRow> best = store.bestPerNet();
+        Map<String, List<StoredRow>> byNet = new LinkedHashMap<>();
+        Set<String> hashes = new java.util.HashSet<>();
+        plans.forEach(p -> hashes.add(p.net().sourceHash()));
+        for (StoredRow r : store.rows()) {
+            if (hashes.contains(r.netHash())) {
+                byNet.computeIfAbsent(r.net(), k -> new ArrayList<>()).add(r);
+            }
+        }
+        out.println();
+        for (Map.Entry<String, List<StoredRow>> e : byNet.entrySet()) {
+            List<StoredRow> rows = new ArrayList<>(e.getValue());
+            rows.sort(java.util.Comparator.comparing(StoredRow::pointKey));
+            long pass = rows.stream().filter(r -> r.verdict() == Verdict.PASS).count();
+            long fail = rows.stream().filter(r -> r.verdict() == Verdict.FAIL).count();
+            long error = rows.size() - pass - fail;
+            out.printf(Locale.ROOT, "%s: %d point(s), %d pass, %d fail, %d error%n", e.getKey(), rows.size(), pass, fail, error);
+            StoredRow b = best.get(e.getKey());
+            out.println("  best (" + org.ringsweep.runner.tune.Objective.DESCRIPTION + "): "
+                    + (b == null ? "none (every point is an error)" : b.pointKey() + " -> " + b.verdict().word()));
+            out.printf(Locale.ROOT, "  %-48s %-7s %10s %10s %12s%n", "POINT", "VERDICT", "EXCURSION", "RINGBACK", "SETTLE");
+            int shown = 0;
+            for (StoredRow r : rows) {
+                if (shown++ == 60) {
+                    out.println("  ... (" + (rows.size() - 60) + " more: ringsweep results OUT_DIR --csv)");
+                    break;
+                }
+                out.printf(Locale.ROOT, "  %-48s %-7s %10s %10s %12s%s%n", r.pointKey(), r.verdict() == Verdict.PASS ? "pass" : r.verdict().word().toUpperCase(Locale.ROOT),
+                        ResultTable.volts(r.worstExcursionV()), ResultTable.volts(r.worstRingbackMarginV()),
+                        ResultTable.seconds(r.longestSettleS()), r == b ? "  << best" : "");
+            }
+        }
+        out.println();
+        out.println(Caution.TEXT);
+    }
+}
