@@ -13,6 +13,11 @@ public enum FailureKind {
     SINGULAR_MATRIX,
     /** The run took longer than the job's timeout (or was stopped from outside) and was killed. */
     TIMEOUT,
+    /**
+     * The solver stopped advancing simulated time (time step collapse) and the run was killed; a
+     * retry with conservative options usually helps (for ngspice, {@code .options method=gear}).
+     */
+    STALLED,
     /** The engine ended abnormally or reported an error not recognised by the other kinds. */
     CRASH,
     /** The engine finished but no usable raw output exists: file absent, unreadable or lacking a probe. */

@@ -18,6 +18,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import java.util.concurrent.TimeUnit;
+import java.util.function.Supplier;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.ringsweep.api.wave.Waveforms;
@@ -35,7 +36,14 @@ import org.ringsweep.runner.raw.RawPlot;
  * {@code HOME}, with {@code -n} so no {@code .spiceinit} start-up file is executed; standard input
  * is closed at once and the console output goes to files, never pipes. A run that outlives its
  * timeout is killed with all its child processes, and a JVM shutdown hook kills runs still going
- * when the program exits (Ctrl-C). Instances are immutable and thread-safe.
+ * when the program exits (Ctrl-C).
+ *
+ * <p>While it waits, the engine reads the end of ngspice's standard error four times a second for
+ * the simulated time ngspice reports ({@code Reference value : …}). A transient whose simulated
+ * time makes no progress for the job's {@link SimulationJob#stallTimeout() stall timeout}, counted
+ * from the first time point reported, has collapsed its time step: it is killed like a timed-out
+ * run and fails as {@link FailureKind#STALLED}, naming the simulated time where it stuck.
+ * Instances are immutable and thread-safe; each run keeps its watch to its own thread.
  */
 public final class NgspiceEngine implements SimulationEngine {
     /** Environment variable naming the ngspice binary (a path); else the first {@code ngspice} on {@code PATH}. */
@@ -210,11 +218,11 @@ public final class NgspiceEngine implements SimulationEngine {
         }
         boolean finished = false;
         boolean interrupted = false;
+        Optional<StallWatch.Stall> stall = Optional.empty();
         try {
-            process.getOutputStream().close(); // stdin at end of file: ngspice must never wait for input
-            finished = process.waitFor(job.timeout().toNanos(), TimeUnit.NANOSECONDS);
-        } catch (IOException e) {
-            finished = waitQuietly(process, job.timeout());
+            closeInput(process);
+            stall = await(process, job, start);
+            finished = !process.isAlive(); // a run that ends just as its limit passes has still ended
         } catch (InterruptedException e) {
             interrupted = true;
         } finally {
@@ -239,6 +247,12 @@ public final class NgspiceEngine implements SimulationEngine {
                     + e.getMessage(), "", elapsed);
         }
         String log = excerpt(stdout, stderr);
+        if (!finished && stall.isPresent()) {
+            StallWatch.Stall st = stall.get();
+            return failure(FailureKind.STALLED, "ngspice stopped advancing at t = " + number(st.simulatedTime())
+                    + " s of " + number(job.stopTime()) + " s (time step collapse) and was stopped after "
+                    + seconds(st.withoutProgress()) + " without progress; the raw output is incomplete", log, elapsed);
+        }
         if (!finished) {
             String why = interrupted
                     ? "the run was interrupted after " + seconds(elapsed) + " and ngspice was stopped"
@@ -365,12 +379,37 @@ public final class NgspiceEngine implements SimulationEngine {
         return quote.isEmpty() ? "" : ": " + quote;
     }
 
-    private static boolean waitQuietly(Process process, Duration timeout) {
+    /** Closes ngspice's standard input at once, so it can never wait for input. */
+    private static void closeInput(Process process) {
         try {
-            return process.waitFor(timeout.toNanos(), TimeUnit.NANOSECONDS);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            return false;
+            process.getOutputStream().close();
+        } catch (IOException e) {
+            // The pipe is already gone: ngspice reads end of file all the same.
+        }
+    }
+
+    /**
+     * Waits until the process ends, its timeout passes or it stalls, looking at the ticker
+     * every {@link StallWatch#POLL}; the process may still run when this returns.
+     *
+     * @param start the {@link System#nanoTime()} at the start of the run
+     * @return the stall, when that ended the wait
+     */
+    private static Optional<StallWatch.Stall> await(Process process, SimulationJob job, long start)
+            throws InterruptedException {
+        StallWatch watch = new StallWatch(job.stderrFile(), job.rawFile(), job.stopTime(), job.stallTimeout());
+        Supplier<Optional<Duration>> cpuTime = () -> process.info().totalCpuDuration();
+        long deadline = start + job.timeout().toNanos();
+        long poll = StallWatch.POLL.toNanos();
+        while (true) {
+            long left = deadline - System.nanoTime();
+            if (left <= 0 || process.waitFor(Math.min(left, poll), TimeUnit.NANOSECONDS)) {
+                return Optional.empty();
+            }
+            Optional<StallWatch.Stall> stall = watch.check(System.nanoTime(), cpuTime);
+            if (stall.isPresent()) {
+                return stall;
+            }
         }
     }
 

@@ -13,9 +13,9 @@ public interface SimulationEngine {
     String version();
 
     /**
-     * Runs one job to its end, its timeout or its failure. Never throws for a simulation problem:
-     * every failure comes back as a {@link SimulationOutcome.Failure} whose message quotes the
-     * engine's own words.
+     * Runs one job to its end, its timeout, its stall (no progress of the simulated time for the
+     * job's stall timeout) or its failure. Never throws for a simulation problem: every failure
+     * comes back as a {@link SimulationOutcome.Failure} whose message quotes the engine's own words.
      *
      * @param job the deck and where to run it
      * @return the waveforms, or why there are none

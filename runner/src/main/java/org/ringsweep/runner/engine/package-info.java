@@ -4,6 +4,12 @@
  * external batch process; {@link org.ringsweep.runner.engine.EngineSelector} resolves the
  * {@code --engine} option.
  *
+ * <p>Every run is bounded twice: by its wall-clock timeout
+ * ({@link org.ringsweep.runner.engine.FailureKind#TIMEOUT}) and by its stall timeout, the time
+ * the transient may go without its simulated time advancing once ngspice has reported a first
+ * time point ({@link org.ringsweep.runner.engine.FailureKind#STALLED}, a time step collapse that
+ * a retry with conservative options usually cures). Both kill the engine's whole process tree.
+ *
  * <p>Tier: internal (used by the runner's commands; not a plugin API).
  */
 package org.ringsweep.runner.engine;

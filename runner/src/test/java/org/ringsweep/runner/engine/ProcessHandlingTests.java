@@ -3,6 +3,7 @@ package org.ringsweep.runner.engine;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -40,10 +41,30 @@ class ProcessHandlingTests {
     }
 
     SimulationOutcome.Failure run(NgspiceEngine engine, Duration timeout) {
+        return run(engine, timeout, SimulationJob.DEFAULT_STALL_TIMEOUT);
+    }
+
+    /** Runs a job with a stop time of 1 ns. */
+    SimulationOutcome.Failure run(NgspiceEngine engine, Duration timeout, Duration stallTimeout) {
         SimulationJob job = new SimulationJob("* fake\n.end\n", tmp.resolve("work"), "point.cir", "out.raw", 1e-9,
-                timeout, Map.of("a", "a"));
+                timeout, Map.of("a", "a")).withStallTimeout(stallTimeout);
         SimulationOutcome o = engine.run(job);
         return assertInstanceOf(SimulationOutcome.Failure.class, o, o::toString);
+    }
+
+    /** A shell loop that keeps a CPU busy and prints ngspice's ticker token {@code ticker} every 20000 rounds. */
+    static String busyTicker(String ticker) {
+        return "i=0; while true; do i=$((i+1)); if [ $((i % 20000)) -eq 0 ]; then printf ' Reference value :  "
+                + ticker + "\\r' >&2; fi; done";
+    }
+
+    static void assertDead(Path pidFile) throws Exception {
+        long child = Long.parseLong(Files.readString(pidFile).strip());
+        Optional<ProcessHandle> handle = ProcessHandle.of(child);
+        for (int i = 0; i < 40 && handle.map(ProcessHandle::isAlive).orElse(false); i++) {
+            Thread.sleep(50); // the killed child may take a moment to be reaped
+        }
+        assertTrue(handle.isEmpty() || !handle.get().isAlive(), "child " + child + " still alive");
     }
 
     @Test
@@ -95,6 +116,46 @@ class ProcessHandlingTests {
         }
         assertTrue(handle.isEmpty() || !handle.get().isAlive(), "child " + child + " still alive");
         assertEquals(0, ProcessTrees.running());
+    }
+
+    @Test
+    void tickerStuckAtOneTimeIsAStallThatKillsTheWholeTree() throws Exception {
+        Path bin = fakeNgspice("sleep 300 & echo $! > child.pid; " + busyTicker("5.00000e-10"));
+        long start = System.nanoTime();
+        SimulationOutcome.Failure f = run(NgspiceEngine.at(bin), Duration.ofSeconds(30), Duration.ofSeconds(1));
+        double seconds = (System.nanoTime() - start) / 1e9;
+        assertEquals(FailureKind.STALLED, f.kind(), f.message());
+        assertTrue(f.message().startsWith("ngspice stopped advancing at t = 5e-10 s of 1e-09 s (time step collapse)"
+                + " and was stopped after "), f.message());
+        assertTrue(seconds < 6, "took " + seconds + " s");
+        assertDead(tmp.resolve("work").resolve("child.pid"));
+        assertEquals(0, ProcessTrees.running());
+    }
+
+    @Test
+    void silenceBeforeTheFirstTimePointIsLeftToTheTimeout() throws IOException {
+        // No ticker at all, as while ngspice parses or seeks the operating point: only the timeout applies.
+        Path bin = fakeNgspice("i=0; while true; do i=$((i+1)); done");
+        SimulationOutcome.Failure f = run(NgspiceEngine.at(bin), Duration.ofSeconds(2), Duration.ofMillis(500));
+        assertEquals(FailureKind.TIMEOUT, f.kind(), f.message());
+    }
+
+    @Test
+    void tickerThatKeepsAdvancingIsLeftToTheTimeout() throws IOException {
+        // 2 ps per token, 0.2 % of the 1 ns stop time: progress every time, never the stop time within 2 s.
+        Path bin = fakeNgspice("i=0; while true; do i=$((i+1)); printf ' Reference value :  %d.00000e-12\\r' $((2 * i)) >&2;"
+                + " sleep 0.1; done");
+        SimulationOutcome.Failure f = run(NgspiceEngine.at(bin), Duration.ofSeconds(2), Duration.ofMillis(500));
+        assertEquals(FailureKind.TIMEOUT, f.kind(), f.message());
+    }
+
+    @Test
+    void stuckTickerOfAProcessThatUsesNoCpuIsNotAStall() throws IOException {
+        // A process that gets no CPU (a starved or sleeping one) has not collapsed its time step.
+        assumeTrue(ProcessHandle.current().info().totalCpuDuration().isPresent(), "the platform tells no CPU time");
+        Path bin = fakeNgspice("while true; do printf ' Reference value :  5.00000e-10\\r' >&2; sleep 0.2; done");
+        SimulationOutcome.Failure f = run(NgspiceEngine.at(bin), Duration.ofSeconds(3), Duration.ofMillis(500));
+        assertEquals(FailureKind.TIMEOUT, f.kind(), f.message());
     }
 
     @Test

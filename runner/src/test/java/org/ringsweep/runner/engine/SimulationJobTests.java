@@ -49,6 +49,32 @@ class SimulationJobTests {
     }
 
     @Test
+    void jobWithoutAStallTimeoutGetsTheDefaultOfFiveSeconds() {
+        SimulationJob j = job("x.cir", "x.raw", 1e-8, Duration.ofSeconds(120));
+        assertEquals(Duration.ofSeconds(5), j.stallTimeout());
+        assertEquals(SimulationJob.DEFAULT_STALL_TIMEOUT, j.stallTimeout());
+    }
+
+    @Test
+    void withStallTimeoutChangesOnlyTheStallTimeout() {
+        SimulationJob j = job("x.cir", "x.raw", 1e-8, Duration.ofSeconds(120));
+        SimulationJob k = j.withStallTimeout(Duration.ofSeconds(2));
+        assertEquals(Duration.ofSeconds(2), k.stallTimeout());
+        assertEquals(new SimulationJob(j.deckText(), j.workDir(), j.deckFileName(), j.rawFileName(), j.stopTime(),
+                j.timeout(), Duration.ofSeconds(2), j.probes()), k);
+        assertEquals(Duration.ofSeconds(5), j.stallTimeout());
+    }
+
+    @Test
+    void stallTimeoutMustBePositive() {
+        SimulationJob j = job("x.cir", "x.raw", 1e-8, Duration.ofSeconds(1));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> j.withStallTimeout(Duration.ZERO));
+        assertTrue(e.getMessage().contains("stallTimeout"), e.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> j.withStallTimeout(Duration.ofSeconds(-1)));
+        assertThrows(NullPointerException.class, () -> j.withStallTimeout(null));
+    }
+
+    @Test
     void probesAreCopied() {
         Map<String, String> probes = new HashMap<>(Map.of("a", "U1.1"));
         SimulationJob j = new SimulationJob("", DIR, "x.cir", "x.raw", 1e-8, Duration.ofSeconds(1), probes);
