@@ -158,8 +158,8 @@ public final class PointRunner {
     /** Failures a different integration method or step can cure; syntax and set-up problems cannot. */
     private static boolean isRetryable(FailureKind kind) {
         return switch (kind) {
-            case CONVERGENCE, TIMEOUT, TRUNCATED_OUTPUT -> true;
-            default -> kind.name().equals("STALLED");
+            case CONVERGENCE, STALLED, TIMEOUT, TRUNCATED_OUTPUT -> true;
+            default -> false;
         };
     }
 

@@ -103,6 +103,16 @@ class PhysicsThroughNgspiceTests {
         assertEquals(2.91923, rx.get("rise").get("v_max").asDouble(), TOL);
     }
 
+    @Test
+    void pointWhoseFirstRunStallsIsRetriedWithConservativeOptions() {
+        JsonNode r = checkOne("physics/stall-retry.yaml");
+        assertTrue(!r.get("verdict").asText().equals("error"), r.toString());
+        assertTrue(r.get("warnings").toString().contains("retried with conservative options"), r.toString());
+        assertTrue(r.get("deck").asText().endsWith("-conservative.cir"), r.toString());
+        // Rs = 15 + 35 = Z0 (lines-and-terminations.md §2 example 2): the far end settles at the rail.
+        assertEquals(3.3, r.get("receivers").get(0).get("rise").get("v_final").asDouble(), TOL);
+    }
+
     private static double firstEdge50(JsonNode record) {
         // The deck's header names the schedule; the rise edge's source 50 % point is the record's
         // settle reference: settle_s + the settling instant is not recoverable, so we read the
