@@ -69,6 +69,26 @@ class BestPerNetTests {
     }
 
     @Test
+    void stayingFurtherInsideTheRailsIsNoBetterThanReachingThem() {
+        // Both stay inside the rails (excursions −0.002 V and 0.0 V count as 0 by the documented
+        // rule), so the shorter settle (2 ns) wins over the deeper "negative excursion".
+        Map<String, StoredRow> best = best(
+                Records.point("N", Records.HASH_A, 100, -0.002, -0.002, 7e-9),
+                Records.point("N", Records.HASH_A, 36, 0.0, -0.001, 2e-9));
+        assertEquals("corner=typ;R5/value=36.0", best.get("N").pointKey());
+    }
+
+    @Test
+    void excursionsWithinOneTenMillivoltStepAreDecidedBySettle() {
+        // 4 mV and 9 mV are the same 10 mV step (documented rule); 12 mV is the next step.
+        Map<String, StoredRow> best = best(
+                Records.point("N", Records.HASH_A, 33, 0.004, 0.0, 5e-9),
+                Records.point("N", Records.HASH_A, 39, 0.009, 0.0, 3e-9),
+                Records.point("N", Records.HASH_A, 30, 0.012, 0.0, 1e-9));
+        assertEquals("corner=typ;R5/value=39.0", best.get("N").pointKey());
+    }
+
+    @Test
     void fullTiesGoToTheEarlierPointInNumericPointOrder() {
         // 100 Ω sorts before 22 Ω as text but after it as a number: point order is numeric.
         Map<String, StoredRow> best = best(
