@@ -24,7 +24,13 @@ public enum LimitName {
     /** Longest allowed delay from the source's 50 % point to the receiver threshold (s). */
     DELAY_MAX("delay_max"),
     /** Most threshold crossings allowed per edge (default 1: more is a double clock). */
-    CROSSINGS_MAX("crossings_max");
+    CROSSINGS_MAX("crossings_max"),
+    /**
+     * Longest allowed rise time at the receiver (s): from the last rising VIL crossing to the first
+     * VIH crossing after it. With I²C thresholds (VIL 0.3·VDD, VIH 0.7·VDD) this is the I²C
+     * specification's 30–70 % t_r.
+     */
+    RISE_MAX("rise_max");
 
     private final String key;
 

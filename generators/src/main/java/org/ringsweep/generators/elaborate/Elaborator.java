@@ -35,7 +35,9 @@ import org.ringsweep.api.net.Segment;
 import org.ringsweep.api.net.SimulationSettings;
 import org.ringsweep.api.net.Stimulus;
 import org.ringsweep.api.net.Value;
+import org.ringsweep.generators.analysis.I2cPullUp;
 import org.ringsweep.generators.models.BuiltinModels;
+import org.ringsweep.generators.models.OpenDrainDriverModel;
 import org.ringsweep.generators.names.NodeNamer;
 
 /**
@@ -81,7 +83,10 @@ import org.ringsweep.generators.names.NodeNamer;
  *     all capacitor parts)} (e^-5 &lt; 1 %) and the longest full ramp. The result is at least 10 ns
  *     and at most 2 µs (capped with a warning). Parallel or RC terminations and clamps only damp
  *     the ringing, so for them the estimate is conservative; inductor parts are not estimated
- *     (give {@code settle} yourself for LC ringing).</li>
+ *     (give {@code settle} yourself for LC ringing). With an {@code open-drain} first driver the
+ *     rising edge is the RC charge of the pull-up, so the settle time is at least 5 × R_p × C_b plus
+ *     the longest full ramp (R_p and C_b as in "Open-drain buses" below); slow buses reach the
+ *     2 µs cap (Standard-mode with R_p·C_b above 0.4 µs): give {@code settle} yourself.</li>
  * <li>Periodic clock ({@code period}, {@code cycles}): edges every half period, alternating,
  *     starting with the first listed direction; each full ramp must be shorter than half a
  *     period. Only the last cycle's two edges are measured; their windows end at the next edge or
@@ -92,6 +97,16 @@ import org.ringsweep.generators.names.NodeNamer;
  *     delay / 4)} over the segments that stay lines; ngspice.md §5 advises at most {@code min(tr/10, TD/2)}, this takes twice that
  *     margin. {@code simulation.step} overrides it. The output step equals the maximum step.</li>
  * </ul>
+ *
+ * <h2>Open-drain buses</h2>
+ * When the first driver is {@code open-drain} ({@link OpenDrainDriverModel}), its pull-up R_p is the
+ * parallel combination of the resistor parts from a net point to a rail other than GND, and the bus
+ * capacitance C_b is the sum of the receivers' input capacitance, the capacitor parts from a net point
+ * to a rail (GND or a supply, both AC ground), every segment's {@code TD/Z0} (its total capacitance,
+ * lines-and-terminations.md §1) and the open-drain drivers' {@code c_out}. The warnings then give the
+ * I²C pull-up window ({@link I2cPullUp}) for the modes of the driver's {@code i2c_mode} at the
+ * driver's {@code v_high}, and say when the pull-up is outside a window, a window is empty
+ * (infeasible) or C_b exceeds a mode's limit. A net with no pull-up gets a warning instead.
  *
  * <h2>Probes and notes</h2>
  * Every driver pin and every receiver pin is recorded (safe node → user name). The circuit notes
@@ -208,6 +223,12 @@ public final class Elaborator {
             }
             net.segments().forEach(seg -> segment(seg, schedule.shortestRamp));
             net.parts().forEach(this::part);
+            if (firstModel instanceof OpenDrainDriverModel od) {
+                call(first, () -> {
+                    openDrainNotes(first, od, swing.high());
+                    return null;
+                });
+            }
 
             Map<String, String> notes = new LinkedHashMap<>();
             notes.put("net", net.name());
@@ -415,6 +436,11 @@ public final class Elaborator {
             }
             double tau = (rOut + path.seriesOhms + z0) * capacitance;
             double settle = ringing + AutoTiming.RC_CONSTANTS * tau + longestRamp;
+            double pullUp = pullUpOhms();
+            if (model instanceof OpenDrainDriverModel && Double.isFinite(pullUp)) {
+                // The released bus rises by the pull-up's RC charge alone.
+                settle = Math.max(settle, AutoTiming.RC_CONSTANTS * pullUp * busCapacitance().total() + longestRamp);
+            }
             if (!(settle <= AutoTiming.CAP)) {
                 warnings.add("automatic settle time " + (Double.isFinite(settle) ? settle + " s" : "(reflections never decay)")
                         + " capped at " + AutoTiming.CAP + " s; ringing may not have settled before the next edge; set stimulus.settle");
@@ -473,6 +499,123 @@ public final class Elaborator {
                 return new Path(total, best.seriesOhms, best.firstZ0);
             }
             return best;
+        }
+
+        // ---- open-drain buses ----
+
+        private boolean isRail(String point) {
+            return point.equals(NetPoint.GROUND) || net.rails().containsKey(point);
+        }
+
+        /** Resistor parts from a net point to a rail other than GND. */
+        private List<Part> pullUps() {
+            List<Part> out = new ArrayList<>();
+            for (Part p : net.parts()) {
+                if (p.kind() == Part.Kind.RESISTOR && isRail(p.a()) != isRail(p.b())) {
+                    String rail = isRail(p.a()) ? p.a() : p.b();
+                    if (!rail.equals(NetPoint.GROUND)) {
+                        out.add(p);
+                    }
+                }
+            }
+            return out;
+        }
+
+        /** The parallel resistance of the pull-ups (ohm); NaN when there are none. */
+        private double pullUpOhms() {
+            List<Part> ups = pullUps();
+            if (ups.isEmpty()) {
+                return Double.NaN;
+            }
+            double g = 0;
+            for (Part p : ups) {
+                g += 1 / Math.max(partValue(p), ZERO_OHMS);
+            }
+            return 1 / g;
+        }
+
+        private BusCapacitance busCapacitance() {
+            double inputs = 0;
+            for (Receiver r : net.receivers()) {
+                inputs += call(r, () -> receiverModel(r).inputCapacitance(r));
+            }
+            double parts = 0;
+            for (Part p : net.parts()) {
+                if (p.kind() == Part.Kind.CAPACITOR && isRail(p.a()) != isRail(p.b())) {
+                    parts += partValue(p);
+                }
+            }
+            double lines = 0;
+            for (Segment s : net.segments()) {
+                lines += segmentDelay(s) / segmentZ0(s);
+            }
+            double pins = 0;
+            for (Driver d : net.drivers()) {
+                if (driverModel(d) instanceof OpenDrainDriverModel od) {
+                    pins += call(d, () -> od.outputCapacitance(d));
+                }
+            }
+            return new BusCapacitance(inputs, parts, lines, pins);
+        }
+
+        /** The I²C pull-up window warnings of an open-drain net (see the class comment). */
+        private void openDrainNotes(Driver first, OpenDrainDriverModel model, double vdd) {
+            List<Part> ups = pullUps();
+            if (ups.isEmpty()) {
+                warnings.add("open-drain driver " + first.pin() + " has no pull-up: no resistor part from the net to a rail"
+                        + " other than GND, so its rising edges cannot rise; add e.g. `{ ref: R1, kind: resistor, value: 4k7,"
+                        + " between: [" + first.pin() + ", VDD] }`");
+                return;
+            }
+            double rp = pullUpOhms();
+            String refs = ups.stream().map(Part::ref).collect(Collectors.joining(" ∥ "));
+            String pullUpText = (ups.size() == 1 ? "pull-up " : "pull-ups ") + refs + " = " + Quantities.ohms(rp);
+            for (Part p : ups) {
+                String rail = isRail(p.a()) ? p.a() : p.b();
+                double railVolts = rails.volts(rail).orElse(vdd);
+                if (railVolts != vdd) {
+                    warnings.add("pull-up " + p.ref() + " goes to " + rail + " (" + railVolts + " V) but the open-drain driver "
+                            + first.pin() + " has v_high " + vdd + " V; the measurements use v_high as the high rail");
+                }
+            }
+            String mode = model.i2cMode(first);
+            if (mode.equals("none")) {
+                return;
+            }
+            BusCapacitance cb = busCapacitance();
+            if (!(cb.total() > 0)) {
+                warnings.add("open-drain net: the bus capacitance is 0, so no I²C pull-up window can be given");
+                return;
+            }
+            warnings.add("open-drain bus: C_b = " + Quantities.picofarads(cb.total()) + " (inputs " + Quantities.picofarads(cb.inputs)
+                    + ", capacitors " + Quantities.picofarads(cb.parts) + ", lines " + Quantities.picofarads(cb.lines)
+                    + ", driver pins " + Quantities.picofarads(cb.pins) + "); " + pullUpText + " to " + vdd + " V");
+            for (I2cPullUp.Mode m : I2cPullUp.Mode.values()) {
+                if (!mode.equals("all") && !mode.equals(m.word())) {
+                    continue;
+                }
+                if (!(vdd > I2cPullUp.vOlMax(vdd))) {
+                    warnings.add("I²C " + m.displayName() + ": no pull-up window, v_high " + vdd + " V is not above V_OL(max)");
+                    continue;
+                }
+                I2cPullUp.Window w = I2cPullUp.window(m, vdd, cb.total());
+                String window = "[" + Quantities.ohms1(w.rMinOhm()) + ", " + Quantities.ohms1(w.rMaxOhm()) + "]";
+                String limits = " (t_r ≤ " + Math.round(m.riseMaxS() * 1e9) + " ns, I_OL " + Math.round(m.sinkCurrentA() * 1e3)
+                        + " mA at V_OL " + I2cPullUp.vOlMax(vdd) + " V, NXP UM10204 §7.1)";
+                if (!w.capacitanceWithinLimit()) {
+                    warnings.add("I²C " + m.displayName() + ": C_b = " + Quantities.picofarads(cb.total()) + " exceeds the mode's "
+                            + Quantities.picofarads(m.busCapacitanceMaxF()) + " limit");
+                }
+                if (!w.feasible()) {
+                    warnings.add("I²C " + m.displayName() + ": no pull-up fits (infeasible): R_p(max) " + Quantities.ohms1(w.rMaxOhm())
+                            + " is below R_p(min) " + Quantities.ohms1(w.rMinOhm()) + " at C_b = " + Quantities.picofarads(cb.total())
+                            + limits);
+                } else if (!w.contains(rp)) {
+                    warnings.add(pullUpText + " is outside the " + m.displayName() + " window " + window + limits);
+                } else {
+                    warnings.add("note: " + pullUpText + " is inside the " + m.displayName() + " window " + window + limits);
+                }
+            }
         }
 
         // ---- elements ----
@@ -675,6 +818,13 @@ public final class Elaborator {
     }
 
     private record Path(double delay, double seriesOhms, double firstZ0) {
+    }
+
+    /** The bus capacitance of an open-drain net by origin (F). */
+    private record BusCapacitance(double inputs, double parts, double lines, double pins) {
+        double total() {
+            return inputs + parts + lines + pins;
+        }
     }
 
     /** One step of the path search. */

@@ -7,18 +7,20 @@ import org.ringsweep.api.model.ModelDescriptor;
 import org.ringsweep.api.model.ReceiverModel;
 
 /**
- * The built-in models: {@code ramp} (driver, {@link RampDriverModel}) and {@code cmos}
- * (receiver, {@link CmosReceiverModel}). Each descriptor is also the model's implementation.
+ * The built-in models: {@code ramp} and {@code open-drain} (drivers, {@link RampDriverModel},
+ * {@link OpenDrainDriverModel}) and {@code cmos} (receiver, {@link CmosReceiverModel}). Each descriptor is also the model's implementation.
  */
 public final class BuiltinModels implements ModelCatalog {
     /** The built-in ramp driver id. */
     public static final String RAMP = "ramp";
+    /** The built-in open-drain driver id. */
+    public static final String OPEN_DRAIN = "open-drain";
     /** The built-in CMOS receiver id. */
     public static final String CMOS = "cmos";
 
     /** The built-in driver models. */
     public static List<DriverModel> drivers() {
-        return List.of(RampDriverModel.INSTANCE);
+        return List.of(RampDriverModel.INSTANCE, OpenDrainDriverModel.INSTANCE);
     }
 
     /** The built-in receiver models. */
@@ -28,6 +30,6 @@ public final class BuiltinModels implements ModelCatalog {
 
     @Override
     public List<ModelDescriptor> all() {
-        return List.of(RampDriverModel.INSTANCE, CmosReceiverModel.INSTANCE);
+        return List.of(RampDriverModel.INSTANCE, OpenDrainDriverModel.INSTANCE, CmosReceiverModel.INSTANCE);
     }
 }

@@ -28,6 +28,7 @@ final class MetricsView {
         o.put("crossings", m.crossings());
         o.put("monotonic", m.monotonic());
         o.put("slew_v_per_s", m.slewVPerS());
+        o.put(m.direction() == Stimulus.Edge.RISE ? "rise_time_s" : "fall_time_s", m.thresholdTransitionS());
         return new EdgeResult(o);
     }
 }

@@ -407,7 +407,7 @@ final class NetReader {
         return switch (name) {
             case OVERSHOOT_MAX, UNDERSHOOT_MAX -> ValueRule.Quantity.of(Dimension.VOLTAGE, ValueRule.Bound.NON_NEGATIVE);
             case RINGBACK_MARGIN_MIN -> ValueRule.Quantity.of(Dimension.VOLTAGE, ValueRule.Bound.ANY);
-            case SETTLE_MAX, DELAY_MAX -> POSITIVE_TIME;
+            case SETTLE_MAX, DELAY_MAX, RISE_MAX -> POSITIVE_TIME;
             case SETTLE_BAND -> new ValueRule.SettleBand();
             case MONOTONIC -> new ValueRule.Flag();
             case CROSSINGS_MAX -> new ValueRule.Count(1);

@@ -79,6 +79,7 @@ public final class EdgeMeasurer {
         double last = crossings == 0 ? Double.NaN : forward.get(crossings - 1).time();
         List<Crossing> nearCrossings = forwardCrossings(u, sign * near, h);
         double nearFirst = nearCrossings.isEmpty() ? Double.NaN : nearCrossings.get(0).time();
+        double transition = first - lastAtOrBefore(nearCrossings, first);
 
         double peak = Double.NaN;
         double margin = Double.NaN;
@@ -108,7 +109,7 @@ public final class EdgeMeasurer {
                 crossings, first, last, nearFirst, first - w.source50(),
                 peak, margin, monotonic, depth,
                 slew[0], slew[1], slew[2],
-                band, settleInstant, settleInstant - w.source50(), settled, tail);
+                band, settleInstant, settleInstant - w.source50(), settled, tail, transition);
     }
 
     /**
@@ -216,6 +217,17 @@ public final class EdgeMeasurer {
         double t80 = firstTime(forwardCrossings(u, from + SLEW_TO_FRACTION * step, h));
         double rate = t80 > t20 ? (SLEW_TO_FRACTION - SLEW_FROM_FRACTION) * step / (t80 - t20) : Double.NaN;
         return new double[] {t20, t80, rate};
+    }
+
+    /** The last crossing at or before {@code t} (s); NaN if none or {@code t} is NaN. */
+    private static double lastAtOrBefore(List<Crossing> crossings, double t) {
+        double last = Double.NaN;
+        for (Crossing c : crossings) {
+            if (c.time() <= t) {
+                last = c.time();
+            }
+        }
+        return last;
     }
 
     private static double firstTime(List<Crossing> crossings) {

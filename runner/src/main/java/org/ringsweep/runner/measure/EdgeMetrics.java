@@ -72,6 +72,14 @@ import org.ringsweep.api.net.Stimulus;
  * @param tailDeviationV         the largest {@code |v − vFinal|} over the last 20 % of the window
  *                               (V): at most {@code settleBandV} exactly when settled, and the
  *                               spread still left when not
+ * @param thresholdTransitionS   the transition time between the receiver's thresholds (s):
+ *                               rising, the first VIH crossing minus the last rising VIL crossing
+ *                               before it (the rise time, {@code rise_time_s}); falling, the first
+ *                               VIL crossing minus the last falling VIH crossing before it (the
+ *                               fall time, {@code fall_time_s}). With I²C input thresholds
+ *                               (VIL = 0.3·VDD, VIH = 0.7·VDD) these are exactly the I²C
+ *                               specification's 30–70 % t_r and 70–30 % t_f. NaN when either
+ *                               crossing is missing (e.g. the edge started past the near threshold)
  */
 public record EdgeMetrics(
         Stimulus.Edge direction,
@@ -101,7 +109,8 @@ public record EdgeMetrics(
         double settleInstantS,
         double settleS,
         boolean settled,
-        double tailDeviationV) {
+        double tailDeviationV,
+        double thresholdTransitionS) {
 
     /** Whether the threshold (VIH rising, VIL falling) was crossed in the edge's direction. */
     public boolean thresholdReached() {

@@ -170,6 +170,9 @@ public final class TuneSearch {
                     min(m, "ringback_margin_min", num(rise, "ringback_margin_v") - l.ringbackMarginMinV());
                     min(m, "crossings_max", l.crossingsMax() - num(rise, "crossings"));
                     edgeTimeMargins(m, l, rise);
+                    if (l.hasRiseMax()) {
+                        min(m, "rise_max", l.riseMaxS() - num(rise, "rise_time_s"));
+                    }
                 }
                 if (fall != null) {
                     min(m, "undershoot_max", l.undershootMaxV() - num(fall, "undershoot_v"));

@@ -19,13 +19,15 @@ import org.ringsweep.api.net.LimitName;
  * @param delayMaxS          longest allowed delay from the source's 50 % point to the threshold
  *                           (s); NaN: no limit
  * @param crossingsMax       most threshold crossings allowed per edge
+ * @param riseMaxS           longest allowed rise time at the receiver, VIL to VIH (s); NaN: no
+ *                           limit
  * @param defaulted          the limits that took their default value, in {@link LimitName} order
- *                           (limits without a default, {@code settle_max} and {@code delay_max},
- *                           are never listed)
+ *                           (limits without a default, {@code settle_max}, {@code delay_max} and
+ *                           {@code rise_max}, are never listed)
  */
 public record EffectiveLimits(double overshootMaxV, double undershootMaxV, double ringbackMarginMinV,
                               double settleMaxS, double settleBandV, boolean monotonic, double delayMaxS,
-                              int crossingsMax, List<LimitName> defaulted) {
+                              int crossingsMax, double riseMaxS, List<LimitName> defaulted) {
     /** Copies the list. */
     public EffectiveLimits {
         defaulted = List.copyOf(defaulted);
@@ -44,6 +46,11 @@ public record EffectiveLimits(double overshootMaxV, double undershootMaxV, doubl
     /** Whether a settling-time limit is set. */
     public boolean hasSettleMax() {
         return !Double.isNaN(settleMaxS);
+    }
+
+    /** Whether a rise-time limit is set. */
+    public boolean hasRiseMax() {
+        return !Double.isNaN(riseMaxS);
     }
 
     /** Whether a delay limit is set. */

@@ -23,6 +23,10 @@ import org.ringsweep.runner.measure.EdgeMetrics;
  *       than the hysteresis (reversal depth, V; hysteresis, V);</li>
  *   <li>{@code settle_max}, only when set: a settled edge taking longer (s, s);</li>
  *   <li>{@code delay_max}, only when set: delay to the threshold longer (s, s);</li>
+ *   <li>{@code rise_max}, only when set, rising edges: a rise time from VIL to VIH
+ *       ({@link EdgeMetrics#thresholdTransitionS()}) longer than the limit (s, s); an edge whose
+ *       rise time was not found is not judged here (it is reported as not reaching VIH, or it
+ *       started above VIL);</li>
  *   <li>{@code settled}: always, when the edge did not settle in its window (see
  *       {@link EdgeMeasurer}): the largest distance from the final level over the last 20 % of the
  *       window (V) against the settle band half-width (V).</li>
@@ -99,6 +103,12 @@ public final class LimitChecker {
             String[] s = Wording.seconds(m.delayS(), l.delayMaxS());
             out.add(new Violation(LimitName.DELAY_MAX.key(), edge, m.delayS(), l.delayMaxS(),
                     name + " reaches " + threshold + " " + s[0] + " after the source's 50 % point; limit " + s[1]));
+        }
+
+        if (rising && l.hasRiseMax() && m.thresholdTransitionS() > l.riseMaxS()) {
+            String[] s = Wording.seconds(m.thresholdTransitionS(), l.riseMaxS());
+            out.add(new Violation(LimitName.RISE_MAX.key(), edge, m.thresholdTransitionS(), l.riseMaxS(),
+                    name + " takes " + s[0] + " to rise from VIL to " + threshold + " at the receiver; limit " + s[1]));
         }
 
         if (!m.settled()) {

@@ -34,8 +34,8 @@ public final class LimitDefaults {
     }
 
     /**
-     * Resolves limits into numbers, defaulting what is not set. {@code settle_max} and
-     * {@code delay_max} have no default (NaN: not checked).
+     * Resolves limits into numbers, defaulting what is not set. {@code settle_max},
+     * {@code delay_max} and {@code rise_max} have no default (NaN: not checked).
      *
      * @param limits     the net's limits already layered with the receiver's
      *                   ({@code Net.limitsFor})
@@ -63,15 +63,19 @@ public final class LimitDefaults {
         boolean monotonic = flag(limits, LimitName.MONOTONIC, MONOTONIC, defaulted);
         double delayMax = number(limits, LimitName.DELAY_MAX, Dimension.TIME, Double.NaN, defaulted);
         int crossingsMax = crossingsMax(limits, defaulted);
+        double riseMax = number(limits, LimitName.RISE_MAX, Dimension.TIME, Double.NaN, defaulted);
         if (!Double.isNaN(settleMax) && !(settleMax > 0)) {
             throw wrong(LimitName.SETTLE_MAX, "a positive time", limits);
         }
         if (!Double.isNaN(delayMax) && !(delayMax > 0)) {
             throw wrong(LimitName.DELAY_MAX, "a positive time", limits);
         }
+        if (!Double.isNaN(riseMax) && !(riseMax > 0)) {
+            throw wrong(LimitName.RISE_MAX, "a positive time", limits);
+        }
         defaulted.sort(null);
         return new EffectiveLimits(overshoot, undershoot, ringback, settleMax, band, monotonic, delayMax,
-                crossingsMax, defaulted);
+                crossingsMax, riseMax, defaulted);
     }
 
     private static double number(Limits limits, LimitName name, Dimension dimension, double fallback,
