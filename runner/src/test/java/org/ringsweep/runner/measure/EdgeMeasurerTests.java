@@ -387,4 +387,46 @@ class EdgeMeasurerTests {
         }
         return new double[][] {t, v};
     }
+
+    @Test
+    void tenToNinetyThresholdsOnAnRcChargeGiveLnNineTimesRc() {
+        // lines-and-terminations.md §5/§7: 10–90 % of a single-pole RC charge = ln 9·RC = 2.197·RC;
+        // 4.7 kΩ × 100 pF → 1032.7 ns. Thresholds at 10 % and 90 % of 3.3 V, samples every 0.1 ns.
+        double rc = 4700 * 100e-12;
+        int n = 40001;
+        double[] t = new double[n];
+        double[] v = new double[n];
+        for (int i = 0; i < n; i++) {
+            t[i] = i * 0.1 * NS;
+            v[i] = 3.3 * (1 - Math.exp(-t[i] / rc));
+        }
+        Levels tenNinety = new Levels(0, 3.3, 0.33, 2.97, 0.165, 0.01);
+        EdgeMetrics m = EdgeMeasurer.measure(t, v, new EdgeWindow(Edge.RISE, 0, 0, t[n - 1]), tenNinety);
+        assertEquals(Math.log(9) * rc, m.thresholdTransitionS(), 1e-13);
+        assertEquals(1032.7e-9, m.thresholdTransitionS(), 0.05e-9);
+    }
+
+    @Test
+    void fallTimeRunsFromTheLastVihCrossingToTheFirstVilCrossing() {
+        // analytic ramp 3.3 -> 0 V over 1..2 ns: VIH 2.0 V at 1 + 1.3/3.3 ns, VIL 0.8 V at 1 + 2.5/3.3 ns,
+        // 1.2/3.3 ns apart (arithmetic)
+        Levels levels = new Levels(0, 3.3, 0.8, 2.0, 0.165, 0.01);
+        EdgeMetrics m = EdgeMeasurer.measure(ns(0, 1, 2, 20), new double[] {3.3, 3.3, 0, 0},
+                new EdgeWindow(Edge.FALL, 0, 1.5 * NS, 20 * NS), levels);
+        assertEquals(1.2 / 3.3 * NS, m.thresholdTransitionS(), 1e-21);
+    }
+
+    @Test
+    void riseTimeStartsAtTheLastVilCrossingBeforeVihAndIsNaNWithoutVih() {
+        // hand-drawn: up through VIL 0.8 V at 1.5 ns, back below at 2.5 ns, up again through VIL at 3.5 ns
+        // (samples 0.4 / 1.2 / 0.4 / 1.2 V around it) and VIH 2.0 V at 4.5 ns: the rise time counts from 3.5 ns.
+        Levels levels = new Levels(0, 3.3, 0.8, 2.0, 0.165, 0.01);
+        double[] t = ns(0, 1, 2, 3, 4, 5, 20);
+        double[] v = {0, 0.4, 1.2, 0.4, 1.2, 2.8, 3.3};
+        EdgeMetrics m = EdgeMeasurer.measure(t, v, new EdgeWindow(Edge.RISE, 0, 1 * NS, 20 * NS), levels);
+        assertEquals(1 * NS, m.thresholdTransitionS(), 1e-21);
+        EdgeMetrics low = EdgeMeasurer.measure(ns(0, 1, 2, 20), new double[] {0, 0, 1.5, 1.5},
+                new EdgeWindow(Edge.RISE, 0, 1 * NS, 20 * NS), levels);
+        assertTrue(Double.isNaN(low.thresholdTransitionS()));
+    }
 }

@@ -182,6 +182,46 @@ class LimitCheckerTests {
     }
 
     @Test
+    void riseTimeIsCheckedOnlyWhenSetAndAcrossItsValue() {
+        // analytic ramp 0 -> 3.3 V over 1..2 ns: VIL 0.8 V at 1 + 0.8/3.3 ns, VIH 2.0 V at 1 + 2.0/3.3 ns,
+        // so the VIL-to-VIH rise time is 1.2/3.3 ns = 363.64 ps; hand-chosen limits 360 / 370 ps
+        double[] t = ns(0, 1, 2, 20);
+        double[] v = {0, 0, 3.3, 3.3};
+        assertEquals(List.of(), check(RISE, t, v, DEFAULTS));
+        List<Violation> fail = check(RISE, t, v, limits(Map.of(LimitName.RISE_MAX, Value.of(0.36e-9, Dimension.TIME))));
+        assertEquals(List.of("rise_max"), keys(fail));
+        assertEquals(1.2 / 3.3 * NS, fail.get(0).measured(), 1e-21);
+        assertEquals("rising edge takes 363.64 ps to rise from VIL to VIH (2.00 V) at the receiver; limit 360.00 ps",
+                fail.get(0).message());
+        assertEquals(List.of(), check(RISE, t, v, limits(Map.of(LimitName.RISE_MAX, Value.of(0.37e-9, Dimension.TIME)))));
+        // a falling edge is not judged by rise_max
+        assertEquals(List.of(), check(FALL, t, new double[] {3.3, 3.3, 0, 0},
+                limits(Map.of(LimitName.RISE_MAX, Value.of(0.01e-9, Dimension.TIME)))));
+    }
+
+    @Test
+    void anRcChargeAcrossI2cThresholdsFailsRiseMaxJustBelowPoint8473RcAndPassesJustAbove() {
+        // lines-and-terminations.md §7: 30 %→70 % of an RC charge takes ln(7/3)·RC = 0.8473·RC;
+        // 4.7 kΩ × 100 pF → 398.2 ns. Sampled every 0.1 ns, so linear interpolation is exact to ~1e-5.
+        double rc = 4700 * 100e-12;
+        int n = 30001;
+        double[] t = new double[n];
+        double[] v = new double[n];
+        for (int i = 0; i < n; i++) {
+            t[i] = i * 0.1 * NS;
+            v[i] = t[i] < 1 * NS ? 0 : 3.3 * (1 - Math.exp(-(t[i] - 1 * NS) / rc));
+        }
+        EdgeWindow w = new EdgeWindow(Edge.RISE, 0, 1 * NS, t[n - 1]);
+        Levels i2c = new Levels(0, 3.3, 0.3 * 3.3, 0.7 * 3.3, DEFAULTS.settleBandV(), 0.01);
+        EffectiveLimits tight = limits(Map.of(LimitName.RISE_MAX, Value.of(397e-9, Dimension.TIME)));
+        EffectiveLimits loose = limits(Map.of(LimitName.RISE_MAX, Value.of(399.5e-9, Dimension.TIME)));
+        EdgeMetrics m = EdgeMeasurer.measure(t, v, w, i2c);
+        assertEquals(398.2e-9, m.thresholdTransitionS(), 0.05e-9);
+        assertEquals(List.of("rise_max"), keys(LimitChecker.check(m, tight)));
+        assertEquals(List.of(), LimitChecker.check(m, loose));
+    }
+
+    @Test
     void anEdgeStillRingingAtTheEndOfItsWindowAlwaysFailsAsNotSettled() {
         // W1 cut at 4.2 ns (waveform-metrics.md §5 points): 0.78 V from its final 3.12 V in the last 20 %
         double[] t = ns(0, 1, 2, 2.5, 3, 3.5, 4, 4.5, 5, 6, 8, 10, 15, 20);

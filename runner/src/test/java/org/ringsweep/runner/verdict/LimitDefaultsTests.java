@@ -95,5 +95,18 @@ class LimitDefaultsTests {
         assertThrows(IllegalArgumentException.class, () -> LimitDefaults.resolve(
                 Limits.of(Map.of(LimitName.DELAY_MAX, Value.of(0, Dimension.TIME))), 3.3));
         assertThrows(IllegalArgumentException.class, () -> LimitDefaults.resolve(Limits.NONE, 0));
+        assertThrows(IllegalArgumentException.class, () -> LimitDefaults.resolve(
+                Limits.of(Map.of(LimitName.RISE_MAX, Value.of(0, Dimension.TIME))), 3.3));
+        assertThrows(IllegalArgumentException.class, () -> LimitDefaults.resolve(
+                Limits.of(Map.of(LimitName.RISE_MAX, Value.of(0.3, Dimension.VOLTAGE))), 3.3));
+    }
+
+    @Test
+    void riseMaxHasNoDefaultAndIsReadAsATime() {
+        EffectiveLimits none = LimitDefaults.resolve(Limits.NONE, 3.3);
+        assertTrue(!none.hasRiseMax());
+        assertTrue(!none.isDefaulted(LimitName.RISE_MAX));
+        EffectiveLimits set = LimitDefaults.resolve(Limits.of(Map.of(LimitName.RISE_MAX, Value.of(300e-9, Dimension.TIME))), 3.3);
+        assertEquals(300e-9, set.riseMaxS(), 0);
     }
 }
