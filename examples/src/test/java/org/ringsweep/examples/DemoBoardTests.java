@@ -51,8 +51,8 @@ class DemoBoardTests {
         Ngspice.require();
         List<JsonNode> records = runDemo(null);
         StringWriter stdout = STDOUT;
-        // 6 nets; SPI0_SCK and SPI0_MOSI have two corners each besides typ: 6 + 2 + 2 points.
-        assertEquals(10, records.size(), stdout.toString());
+        // 7 nets; SPI0_SCK and SPI0_MOSI have two corners each besides typ: 7 + 2 + 2 points.
+        assertEquals(11, records.size(), stdout.toString());
         for (JsonNode r : records) {
             String expected = r.get("net").asText().equals("SYNC_OUT_REVA") ? "fail" : "pass";
             assertEquals(expected, r.get("verdict").asText(), r.toString());
@@ -88,5 +88,24 @@ class DemoBoardTests {
         // 39 ohm + 12 ohm ≈ 50 ohm leaves only a small excursion; 5 % of the 3.3 V swing as a bound.
         assertTrue(rise.get("overshoot_v").asDouble() < 0.05 * 3.3, rise.toString());
         assertEquals(1, rise.get("crossings").asInt());
+    }
+
+    @Test
+    void i2cDataLineRisesAsThePullUpChargesTheBusCapacitance() throws Exception {
+        Ngspice.require();
+        JsonNode sda = runDemo(null).stream()
+                .filter(r -> r.get("net").asText().equals("I2C1_SDA")).findFirst().orElseThrow();
+        assertEquals("pass", sda.get("verdict").asText(), sda.toString());
+        // lines-and-terminations.md §7: 30–70 % rise = 0.8473·Rp·Cb. Cb = 2 × 6 pF inputs + 5 pF pin + the
+        // 150 mm of 60 ohm line, TD/Z0 = (0.15 m · √3.4 / c) / 60 ohm = 15.38 pF (§1): 32.38 pF; with 4.7 kΩ
+        // 128.9 ns. The line is far shorter than the rise (TD 0.92 ns, §3), so lumping it is fair; 3 % tolerance.
+        double cb = 12e-12 + 5e-12 + 0.15 * Math.sqrt(3.4) / 299_792_458.0 / 60;
+        double expected = Math.log(7.0 / 3.0) * 4700 * cb;
+        for (JsonNode rx : sda.get("receivers")) {
+            assertEquals(expected, rx.get("rise").get("rise_time_s").asDouble(), 0.03 * expected, rx.toString());
+        }
+        // lines-and-terminations.md §7: Fast-mode R_p(min) at 3.3 V is 966.7 Ω; R_p(max) = 300 ns / (0.8473 · Cb)
+        String warnings = sda.get("warnings").toString();
+        assertTrue(warnings.contains("R20 = 4.7 kΩ is inside the Fast-mode window [966.7 Ω, "), warnings);
     }
 }
