@@ -26,6 +26,7 @@ final class ResultTable {
         List<String[]> rows = new ArrayList<>();
         List<String> notes = new ArrayList<>();
         for (ResultRecord r : records) {
+            r.warnings().forEach(w -> notes.add("NOTE " + r.net() + " " + r.corner() + ": " + w));
             if (r.verdict() == Verdict.ERROR) {
                 rows.add(new String[] {r.net(), r.corner(), "-", "-", "", "", "", "", "", "", "ERROR <<"});
                 notes.add("ERROR " + r.net() + " " + r.corner() + ": " + r.error());
