@@ -7,6 +7,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.ringsweep.api.model.EdgeCheck;
+import org.ringsweep.api.model.EdgeSample;
 import org.ringsweep.api.net.Net;
 import org.ringsweep.api.net.Point;
 import org.ringsweep.api.net.Receiver;
@@ -26,6 +28,7 @@ import org.ringsweep.runner.measure.EdgeMeasurer;
 import org.ringsweep.runner.measure.EdgeMetrics;
 import org.ringsweep.runner.measure.EdgeWindow;
 import org.ringsweep.runner.measure.Levels;
+import org.ringsweep.runner.plugins.PluginFailureException;
 import org.ringsweep.runner.results.EdgeResult;
 import org.ringsweep.runner.results.ReceiverResult;
 import org.ringsweep.runner.results.ResultRecord;
@@ -56,8 +59,11 @@ public final class PointRunner {
     private final Optional<SimulationEngine> engine;
     private final Path outDir;
     private final Duration timeout;
+    private final List<EdgeCheck> checks;
 
     /**
+     * A runner with no extra edge checks.
+     *
      * @param elaborator the elaborator
      * @param deckWriter the deck writer (built once per run)
      * @param engine     the engine, or empty to write decks only
@@ -65,11 +71,26 @@ public final class PointRunner {
      * @param timeout    per-point simulation timeout
      */
     public PointRunner(Elaborator elaborator, DeckWriter deckWriter, Optional<SimulationEngine> engine, Path outDir, Duration timeout) {
+        this(elaborator, deckWriter, engine, outDir, timeout, List.of());
+    }
+
+    /**
+     * @param elaborator the elaborator
+     * @param deckWriter the deck writer (built once per run)
+     * @param engine     the engine, or empty to write decks only
+     * @param outDir     the output folder ({@code --out})
+     * @param timeout    per-point simulation timeout
+     * @param checks     extra edge checks (plugins), run on every receiver and edge after the
+     *                   built-in limits; each finding is a violation under the check's limit key
+     */
+    public PointRunner(Elaborator elaborator, DeckWriter deckWriter, Optional<SimulationEngine> engine, Path outDir, Duration timeout,
+                       List<? extends EdgeCheck> checks) {
         this.elaborator = elaborator;
         this.deckWriter = deckWriter;
         this.engine = engine;
         this.outDir = outDir;
         this.timeout = timeout;
+        this.checks = List.copyOf(checks);
     }
 
     /** What one point is: the corner, its overrides and (for sweeps) the swept values. */
@@ -106,9 +127,29 @@ public final class PointRunner {
      * options (Gear integration, tighter reltol, a quarter of the time step; see
      * {@link DeckOptions#conservative()}), in a deck of its own ({@code <stem>-conservative.cir}).
      * A point that still fails gives an error record quoting the engine; it never throws for that.
+     * A plugin model or check that throws ({@link PluginFailureException}) gives an error record
+     * naming the plugin and the point.
      */
     public ResultRecord run(Net net, PointSpec spec) {
-        return run(net, spec, elaborate(net, spec));
+        Elaboration elab;
+        try {
+            elab = elaborate(net, spec);
+        } catch (PluginFailureException e) {
+            return pluginErrorRecord(net, spec, e);
+        }
+        return run(net, spec, elab);
+    }
+
+    /**
+     * The error record of a point where plugin code threw: the message names the plugin, what
+     * failed, the net and the point.
+     */
+    public ResultRecord pluginErrorRecord(Net net, PointSpec spec, PluginFailureException e) {
+        return errorRecord(net, spec, pluginMessage(net, spec, e));
+    }
+
+    private static String pluginMessage(Net net, PointSpec spec, PluginFailureException e) {
+        return e.getMessage() + " (net " + net.name() + ", point " + label(spec) + ")";
     }
 
     /** Elaborates a point (its overrides applied to the net). */
@@ -148,7 +189,12 @@ public final class PointRunner {
             double swing = elab.vHigh() - elab.vLow();
             EffectiveLimits limits = LimitDefaults.resolve(applied.limitsFor(receiver), swing);
             defaulted.addAll(limits.defaultedKeys());
-            ReceiverResult rr = measureReceiver(w, probe, elab.edges(), limits, swing);
+            ReceiverResult rr;
+            try {
+                rr = measureReceiver(w, probe, elab.edges(), limits, swing, checks);
+            } catch (PluginFailureException e) {
+                return record(net, spec, eng, Verdict.ERROR, List.of(), written.deck(), pluginMessage(net, spec, e), List.of(), warnings);
+            }
             receivers.add(rr);
             worst = worst.worst(rr.verdict());
         }
@@ -169,7 +215,7 @@ public final class PointRunner {
     }
 
     private static ReceiverResult measureReceiver(Waveforms w, ReceiverProbe probe, List<EdgeEvent> edges,
-                                                  EffectiveLimits limits, double swing) {
+                                                  EffectiveLimits limits, double swing, List<EdgeCheck> checks) {
         double[] t = w.times();
         double[] v = w.signal(probe.node()).orElseThrow(() -> new IllegalStateException("engine returned no signal for " + probe.node()));
         Levels levels = new Levels(probe.lowRail(), probe.highRail(), probe.vil(), probe.vih(),
@@ -187,8 +233,31 @@ public final class PointRunner {
                 violations.add(new ViolationRecord(viol.limit(), viol.edge().word(), viol.measured(), viol.limitValue(),
                         limits.defaultedKeys().contains(viol.limit()), viol.message()));
             }
+            if (!checks.isEmpty()) {
+                EdgeSample sample = sample(t, v, probe, e, end);
+                for (EdgeCheck check : checks) {
+                    check.check(sample).ifPresent(f -> violations.add(new ViolationRecord(check.limitKey(), e.direction().word(),
+                            f.measured(), f.limit(), false, f.message())));
+                }
+            }
         }
         return new ReceiverResult(probe.pin(), violations.isEmpty() ? Verdict.PASS : Verdict.FAIL, results, violations);
+    }
+
+    /** The samples of one edge's window, for the extra checks. */
+    private static EdgeSample sample(double[] t, double[] v, ReceiverProbe probe, EdgeEvent e, double end) {
+        int from = 0;
+        while (from < t.length - 1 && t[from] < e.start()) {
+            from++;
+        }
+        int to = from;
+        while (to < t.length && t[to] <= end) {
+            to++;
+        }
+        to = Math.max(to, from + 1);
+        return new EdgeSample(probe.pin(), e.direction(), e.start(), e.source50(), end,
+                java.util.Arrays.copyOfRange(t, from, to), java.util.Arrays.copyOfRange(v, from, to),
+                probe.vil(), probe.vih(), probe.lowRail(), probe.highRail());
     }
 
     private ResultRecord record(Net net, PointSpec spec, SimulationEngine eng, Verdict verdict, List<ReceiverResult> receivers,

@@ -8,6 +8,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.ringsweep.api.model.ModelCatalog;
 import org.ringsweep.api.net.Net;
 import org.ringsweep.api.net.NetValidationException;
 import org.ringsweep.api.net.Point;
@@ -15,7 +16,6 @@ import org.ringsweep.generators.deck.DeckWriter;
 import org.ringsweep.generators.elaborate.Elaboration;
 import org.ringsweep.generators.elaborate.ElaborationException;
 import org.ringsweep.generators.elaborate.Elaborator;
-import org.ringsweep.generators.models.BuiltinModels;
 import org.ringsweep.runner.check.Caution;
 import org.ringsweep.runner.check.PointRunner;
 import org.ringsweep.runner.check.ResultsFile;
@@ -26,6 +26,9 @@ import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.input.InputException;
 import org.ringsweep.runner.input.NetFileLoader;
 import org.ringsweep.runner.input.PointParser;
+import org.ringsweep.runner.plugins.PluginFailureException;
+import org.ringsweep.runner.plugins.PluginLoadException;
+import org.ringsweep.runner.plugins.PluginRegistry;
 import org.ringsweep.runner.results.ResultJson;
 import org.ringsweep.runner.results.ResultRecord;
 import org.ringsweep.runner.results.Verdict;
@@ -56,13 +59,22 @@ final class CheckFlow {
     }
 
     Outcome execute(List<Path> files, boolean corners, List<String> sets, boolean simulate) {
-        BuiltinModels catalog = new BuiltinModels();
+        PluginRegistry registry;
+        try {
+            registry = Plugins.load(common.plugins, common.quiet, err);
+        } catch (PluginLoadException e) {
+            err.println("ringsweep: " + e.getMessage());
+            return new Outcome(ExitCodes.INPUT, List.of());
+        }
+        ModelCatalog catalog = registry.catalog();
         NetFileLoader loader = new NetFileLoader(catalog);
         PointParser points = new PointParser(catalog);
-        Elaborator elaborator = new Elaborator();
+        Elaborator elaborator = registry.elaborator();
         Duration timeout = Duration.ofMillis(Math.round(common.timeoutSeconds * 1000));
         Map<Net, List<PointRunner.PointSpec>> plan = new LinkedHashMap<>();
         Map<Net, Map<PointRunner.PointSpec, Elaboration>> elaborated = new java.util.IdentityHashMap<>();
+        // Points whose plugin model threw while elaborating: error records, not input errors.
+        Map<Net, Map<PointRunner.PointSpec, PluginFailureException>> failed = new java.util.IdentityHashMap<>();
         List<String> problems = new ArrayList<>();
         for (Path file : files) {
             try {
@@ -75,10 +87,16 @@ final class CheckFlow {
                 }
                 PointRunner planner = new PointRunner(elaborator, null, Optional.empty(), common.out, timeout);
                 Map<PointRunner.PointSpec, Elaboration> byPoint = new java.util.HashMap<>();
+                Map<PointRunner.PointSpec, PluginFailureException> failures = new java.util.HashMap<>();
                 for (PointRunner.PointSpec s : specs) {
-                    byPoint.put(s, planner.elaborate(net, s)); // every input check before anything runs
+                    try {
+                        byPoint.put(s, planner.elaborate(net, s)); // every input check before anything runs
+                    } catch (PluginFailureException e) {
+                        failures.put(s, e);
+                    }
                 }
                 elaborated.put(net, byPoint);
+                failed.put(net, failures);
                 plan.put(net, specs);
             } catch (InputException | ElaborationException e) {
                 problems.add(e.getMessage());
@@ -113,22 +131,31 @@ final class CheckFlow {
                 return new Outcome(ExitCodes.SIMULATION, List.of());
             }
         }
-        PointRunner runner = new PointRunner(elaborator, decks, engine, common.out, timeout);
+        PointRunner runner = new PointRunner(elaborator, decks, engine, common.out, timeout, registry.checks());
         if (!simulate) {
+            int code = ExitCodes.OK;
             for (Map.Entry<Net, List<PointRunner.PointSpec>> e : plan.entrySet()) {
                 for (PointRunner.PointSpec s : e.getValue()) {
+                    PluginFailureException failure = failed.get(e.getKey()).get(s);
+                    if (failure != null) {
+                        err.println("ringsweep: " + runner.pluginErrorRecord(e.getKey(), s, failure).error());
+                        code = ExitCodes.SIMULATION;
+                        continue;
+                    }
                     out.println(runner.writeDeck(e.getKey(), s, elaborated.get(e.getKey()).get(s)).deck());
                 }
             }
-            return new Outcome(ExitCodes.OK, List.of());
+            return new Outcome(code, List.of());
         }
         List<ResultRecord> records = new ArrayList<>();
         try (ResultsFile results = ResultsFile.create(common.out)) {
             for (Map.Entry<Net, List<PointRunner.PointSpec>> e : plan.entrySet()) {
                 for (PointRunner.PointSpec s : e.getValue()) {
                     ResultRecord r;
+                    PluginFailureException failure = failed.get(e.getKey()).get(s);
                     try {
-                        r = runner.run(e.getKey(), s, elaborated.get(e.getKey()).get(s));
+                        r = failure != null ? runner.pluginErrorRecord(e.getKey(), s, failure)
+                                : runner.run(e.getKey(), s, elaborated.get(e.getKey()).get(s));
                     } catch (RuntimeException ex) {
                         // A model or engine failure for this point: record it and go on.
                         r = runner.errorRecord(e.getKey(), s, String.valueOf(ex.getMessage()));

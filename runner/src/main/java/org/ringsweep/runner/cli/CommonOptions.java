@@ -23,6 +23,10 @@ public final class CommonOptions {
             description = "Folder of deck templates that override the built-in ones by file name.")
     Path templates;
 
+    @Option(names = "--plugins", paramLabel = "DIR",
+            description = "Folder of plugin jars whose driver models, receiver models and checks are added to the built-in ones.")
+    Path plugins;
+
     @Option(names = "--timeout", paramLabel = "SECONDS", defaultValue = "120",
             description = "Wall-clock limit per simulation in seconds (default: ${DEFAULT-VALUE}).")
     double timeoutSeconds;

@@ -15,12 +15,12 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
+import org.ringsweep.api.model.ModelCatalog;
 import org.ringsweep.api.net.Net;
 import org.ringsweep.api.net.NetValidationException;
 import org.ringsweep.generators.deck.DeckWriter;
 import org.ringsweep.generators.elaborate.ElaborationException;
 import org.ringsweep.generators.elaborate.Elaborator;
-import org.ringsweep.generators.models.BuiltinModels;
 import org.ringsweep.runner.batch.BatchRunner;
 import org.ringsweep.runner.batch.Progress;
 import org.ringsweep.runner.check.Caution;
@@ -32,6 +32,9 @@ import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.input.InputException;
 import org.ringsweep.runner.input.NetFileLoader;
 import org.ringsweep.runner.input.PointParser;
+import org.ringsweep.runner.plugins.PluginFailureException;
+import org.ringsweep.runner.plugins.PluginLoadException;
+import org.ringsweep.runner.plugins.PluginRegistry;
 import org.ringsweep.runner.results.Verdict;
 import org.ringsweep.runner.store.PointKey;
 import org.ringsweep.runner.store.ResultStore;
@@ -74,9 +77,16 @@ public final class SweepCommand implements Callable<Integer> {
     public Integer call() throws InterruptedException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        BuiltinModels catalog = new BuiltinModels();
+        PluginRegistry registry;
+        try {
+            registry = Plugins.load(common.plugins, common.quiet, err);
+        } catch (PluginLoadException e) {
+            err.println("ringsweep: " + e.getMessage());
+            return ExitCodes.INPUT;
+        }
+        ModelCatalog catalog = registry.catalog();
         PointParser parser = new PointParser(catalog);
-        Elaborator elaborator = new Elaborator();
+        Elaborator elaborator = registry.elaborator();
         int workers = jobs == null ? Runtime.getRuntime().availableProcessors() : jobs;
         if (workers < 1) {
             err.println("ringsweep: sweep: --jobs: expected at least 1, found " + workers);
@@ -94,7 +104,11 @@ public final class SweepCommand implements Callable<Integer> {
                 Net net = loader.load(netFile);
                 SweepPlanner.Plan plan = planner.plan(sweep, net, parser);
                 if (!plan.points().isEmpty()) {
-                    checker.elaborate(net, plan.points().get(0)); // the net's models accept its values
+                    try {
+                        checker.elaborate(net, plan.points().get(0)); // the net's models accept its values
+                    } catch (PluginFailureException e) {
+                        warnings.add(e.getMessage() + "; its points will be error records");
+                    }
                 }
                 plans.add(plan);
                 warnings.addAll(plan.warnings());
@@ -152,7 +166,7 @@ public final class SweepCommand implements Callable<Integer> {
                 out.flush();
             }
             DeckWriter decks = common.templates == null ? new DeckWriter() : DeckWriter.withTemplateDir(common.templates);
-            PointRunner runner = new PointRunner(elaborator, decks, Optional.of(engine), common.out, timeout);
+            PointRunner runner = new PointRunner(elaborator, decks, Optional.of(engine), common.out, timeout, registry.checks());
             BatchRunner batch = new BatchRunner(runner, workers);
             Thread hook = new Thread(batch::stop, "ringsweep-stop");
             Runtime.getRuntime().addShutdownHook(hook);

@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.ringsweep.api.model.ModelCatalog;
 import org.ringsweep.api.net.Location;
 import org.ringsweep.api.net.Net;
 import org.ringsweep.api.net.Value;
@@ -17,8 +18,6 @@ import org.ringsweep.api.net.ValuePath;
 import org.ringsweep.api.quantity.Quantities;
 import org.ringsweep.generators.deck.DeckWriter;
 import org.ringsweep.generators.elaborate.ElaborationException;
-import org.ringsweep.generators.elaborate.Elaborator;
-import org.ringsweep.generators.models.BuiltinModels;
 import org.ringsweep.runner.check.Caution;
 import org.ringsweep.runner.check.PointRunner;
 import org.ringsweep.runner.check.ResultsFile;
@@ -29,6 +28,8 @@ import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.input.InputException;
 import org.ringsweep.runner.input.NetFileLoader;
 import org.ringsweep.runner.input.PointParser;
+import org.ringsweep.runner.plugins.PluginLoadException;
+import org.ringsweep.runner.plugins.PluginRegistry;
 import org.ringsweep.runner.results.Verdict;
 import org.ringsweep.runner.sweep.ESeries;
 import org.ringsweep.runner.tune.Objective;
@@ -77,7 +78,14 @@ public final class TuneCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        BuiltinModels catalog = new BuiltinModels();
+        PluginRegistry registry;
+        try {
+            registry = Plugins.load(common.plugins, common.quiet, err);
+        } catch (PluginLoadException e) {
+            err.println("ringsweep: " + e.getMessage());
+            return ExitCodes.INPUT;
+        }
+        ModelCatalog catalog = registry.catalog();
         Optional<ESeries.Series> s = ESeries.Series.named(series);
         if (s.isEmpty()) {
             err.println("ringsweep: tune: --series: unknown series `" + series + "`; expected E3, E6, E12, E24, E48, E96 or E192");
@@ -127,8 +135,8 @@ public final class TuneCommand implements Callable<Integer> {
             return ExitCodes.SIMULATION;
         }
         DeckWriter decks = common.templates == null ? new DeckWriter() : DeckWriter.withTemplateDir(common.templates);
-        PointRunner runner = new PointRunner(new Elaborator(), decks, Optional.of(engine), common.out,
-                Duration.ofMillis(Math.round(common.timeoutSeconds * 1000)));
+        PointRunner runner = new PointRunner(registry.elaborator(), decks, Optional.of(engine), common.out,
+                Duration.ofMillis(Math.round(common.timeoutSeconds * 1000)), registry.checks());
         TuneResult result = new TuneSearch(runner).tune(net, target, low.dimension(), candidates, tol);
         try (ResultsFile results = ResultsFile.create(common.out)) {
             result.evaluated().forEach(e -> results.append(e.record()));
