@@ -3,6 +3,7 @@ package org.ringsweep.runner.plugins;
 import java.util.List;
 import java.util.Map;
 import org.ringsweep.generators.models.CmosReceiverModel;
+import org.ringsweep.generators.models.OpenDrainDriverModel;
 import org.ringsweep.generators.models.RampDriverModel;
 import org.ringsweep.runner.testing.ModelContract;
 
@@ -12,6 +13,7 @@ class BuiltinModelContractTests extends ModelContract {
     protected List<ModelCase> cases() {
         List<ModelCase> cases = List.of(
                 new ModelCase(RampDriverModel.INSTANCE, Map.of("v_high", "VCC", "rise", "1ns", "r_out", "25")),
+                new ModelCase(OpenDrainDriverModel.INSTANCE, Map.of("v_high", "VCC", "r_on", "20", "i2c_mode", "none")),
                 new ModelCase(CmosReceiverModel.INSTANCE, Map.of("c_in", "2pF", "vih", "2.0", "vil", "0.8")));
         // Every built-in model has a case: a new built-in must be added here.
         org.junit.jupiter.api.Assertions.assertEquals(PluginRegistry.builtInOnly().catalog().all().size(), cases.size(),

@@ -28,7 +28,7 @@ class PluginRegistryTests {
     @Test
     void builtInOnlyKnowsTheBuiltInModelsAndNoChecks() {
         PluginRegistry r = PluginRegistry.builtInOnly();
-        assertEquals(List.of("ramp", "cmos"), r.catalog().all().stream().map(ModelDescriptor::id).toList());
+        assertEquals(List.of("open-drain", "ramp", "cmos"), r.catalog().all().stream().map(ModelDescriptor::id).toList());
         assertTrue(r.catalog().all().stream().allMatch(m -> m.origin().equals(PluginRegistry.BUILT_IN)));
         assertTrue(r.checks().isEmpty());
         assertTrue(r.plugins().isEmpty());
@@ -39,7 +39,7 @@ class PluginRegistryTests {
         PluginRegistry r = withPlugins(TestPlugins.plugin("acme", TestPlugins.rampNamed("acme-io")));
         ModelDescriptor m = r.catalog().find(ModelDescriptor.Role.DRIVER, "acme-io").orElseThrow();
         assertEquals("plugin `acme` 1.0 (test:acme)", m.origin());
-        assertEquals(List.of("acme-io", "ramp"), r.drivers().stream().map(ModelDescriptor::id).sorted().toList());
+        assertEquals(List.of("acme-io", "open-drain", "ramp"), r.drivers().stream().map(ModelDescriptor::id).sorted().toList());
         assertTrue(r.messages().get(0).contains("plugin `acme` 1.0 (test:acme): driver acme-io"), r.messages().toString());
     }
 
