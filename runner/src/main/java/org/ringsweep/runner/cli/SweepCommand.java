@@ -48,13 +48,16 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /**
- * {@code ringsweep sweep SWEEP.yaml [--jobs N] [--resume]}: run every point of a sweep into the
+ * {@code ringsweep sweep SWEEP.yaml [--jobs N] [--batch N] [--resume]}: run every point of a sweep into the
  * results store under {@code --out}, each committed as it finishes.
  */
 @Command(name = "sweep", mixinStandardHelpOptions = true,
         description = {"Run a sweep (ringsweep/sweep-1) over its nets into the results store OUT/results.sqlite.",
                 "Each finished point is committed at once; --resume re-runs only the unfinished points."})
 public final class SweepCommand implements Callable<Integer> {
+    /** The default of {@code --batch}: MEASURED_PLACEHOLDER */
+    public static final int DEFAULT_BATCH = 8;
+
     @Spec
     CommandSpec spec;
 
@@ -66,6 +69,15 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Option(names = "--jobs", paramLabel = "N", description = "Parallel simulations (default: the number of cores).")
     Integer jobs;
+
+    /**
+     * Points per ngspice process. Default {@value #DEFAULT_BATCH}, measured with
+     * {@code BatchBenchmark} (see {@link #DEFAULT_BATCH}).
+     */
+    @Option(names = "--batch", paramLabel = "N", defaultValue = "" + DEFAULT_BATCH,
+            description = "Points per ngspice process (default: ${DEFAULT-VALUE}); 1 runs one process per point."
+                    + " Records are the same whatever N is.")
+    int batchSize;
 
     @Option(names = "--resume", description = "Continue the sweep stored under --out: run only the points not yet finished.")
     boolean resume;
@@ -80,6 +92,10 @@ public final class SweepCommand implements Callable<Integer> {
         int workers = jobs == null ? Runtime.getRuntime().availableProcessors() : jobs;
         if (workers < 1) {
             err.println("ringsweep: sweep: --jobs: expected at least 1, found " + workers);
+            return ExitCodes.INPUT;
+        }
+        if (batchSize < 1) {
+            err.println("ringsweep: sweep: --batch: expected at least 1, found " + batchSize);
             return ExitCodes.INPUT;
         }
         Duration timeout = Duration.ofMillis(Math.round(common.timeoutSeconds * 1000));
@@ -153,7 +169,7 @@ public final class SweepCommand implements Callable<Integer> {
             }
             DeckWriter decks = common.templates == null ? new DeckWriter() : DeckWriter.withTemplateDir(common.templates);
             PointRunner runner = new PointRunner(elaborator, decks, Optional.of(engine), common.out, timeout);
-            BatchRunner batch = new BatchRunner(runner, workers);
+            BatchRunner batch = new BatchRunner(runner, workers, batchSize);
             Thread hook = new Thread(batch::stop, "ringsweep-stop");
             Runtime.getRuntime().addShutdownHook(hook);
             Progress progress = new Progress(err, tasks.size(), System.console() != null, common.quiet, Duration.ofSeconds(10), System::nanoTime);
