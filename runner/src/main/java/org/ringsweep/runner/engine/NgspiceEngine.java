@@ -44,6 +44,9 @@ import org.ringsweep.runner.raw.RawPlot;
  * from the first time point reported, has collapsed its time step: it is killed like a timed-out
  * run and fails as {@link FailureKind#STALLED}, naming the simulated time where it stuck.
  * Instances are immutable and thread-safe; each run keeps its watch to its own thread.
+ *
+ * <p>{@link #runBatch} runs several points in one process ({@link NgspiceBatch}) and runs every
+ * point it cannot prove good again alone with {@link #run}.
  */
 public final class NgspiceEngine implements SimulationEngine {
     /** Environment variable naming the ngspice binary (a path); else the first {@code ngspice} on {@code PATH}. */
