@@ -122,7 +122,65 @@ public final class DeckWriter {
      * @throws DeckWriteException if a template fails or a sub-circuit text is not allowed
      */
     public String render(Circuit circuit, DeckOptions options) {
+        return render(circuit, options, false);
+    }
+
+    /**
+     * Renders the deck of one point of a batch: the same title, header, elements, models and
+     * analysis line as {@link #render}, but no {@code .control} block, so a batch master deck
+     * ({@link #renderBatch}) can {@code source} it. The raw file name of {@code options} is not
+     * used (the master deck writes the raw file).
+     *
+     * @param circuit the circuit
+     * @param options the settings (binary and conservative as for {@link #render})
+     * @return the deck text, lines ending in {@code \n}
+     * @throws DeckWriteException as {@link #render}, and when the templates (a user's
+     *                            {@code control.ftl} that ignores {@code circuitOnly}) still write a
+     *                            {@code .control} block: such a point cannot run in a batch
+     */
+    public String renderCircuitOnly(Circuit circuit, DeckOptions options) {
+        String deck = render(circuit, options, true);
+        for (String line : deck.split("\n")) {
+            String t = line.strip().toLowerCase(Locale.ROOT);
+            if (t.startsWith(".control") || t.startsWith(".endc")) {
+                throw new DeckWriteException("the templates write a .control block into a circuit-only deck"
+                        + " (control.ftl must leave it out when `circuitOnly` is true); the point cannot run in a batch");
+            }
+        }
+        return deck;
+    }
+
+    /**
+     * Renders a batch master deck from {@code batch.ftl}: one ngspice process sources each entry's
+     * circuit-only deck in turn, runs it, writes its probes to the entry's raw file, prints
+     * {@code RSW_DONE <k> <last time point>} on standard output (k counting entries from 0), and
+     * removes plots and circuit before the next entry; it ends with {@code quit 0}. The deck holds
+     * no user text: a fixed title and the generated names of the entries only.
+     *
+     * @param entries the points, in running order; at least one
+     * @param binary  binary raw files ({@code set filetype=binary}), else ASCII
+     * @return the master deck text, lines ending in {@code \n}
+     * @throws DeckWriteException if the template fails
+     * @throws IllegalArgumentException when {@code entries} is empty
+     */
+    public String renderBatch(List<BatchEntry> entries, boolean binary) {
+        if (entries.isEmpty()) {
+            throw new IllegalArgumentException("a batch needs at least one entry");
+        }
+        Map<String, Object> model = new LinkedHashMap<>();
+        model.put("filetype", binary ? "binary" : "ascii");
+        List<Map<String, Object>> list = new ArrayList<>();
+        for (BatchEntry e : entries) {
+            list.add(Map.of("deck", e.deckFileName(), "raw", e.rawFileName(), "probes", e.probes()));
+        }
+        model.put("entries", list);
+        String deck = process("batch.ftl", model);
+        return deck.endsWith("\n") ? deck : deck + "\n";
+    }
+
+    private String render(Circuit circuit, DeckOptions options, boolean circuitOnly) {
         Map<String, Object> model = dataModel(circuit, options);
+        model.put("circuitOnly", circuitOnly);
         String body = process("body.ftl", model);
         if (!body.endsWith("\n")) {
             body = body + "\n";

@@ -13,7 +13,9 @@ import org.ringsweep.api.net.Net;
 import org.ringsweep.api.net.Point;
 import org.ringsweep.api.net.Receiver;
 import org.ringsweep.api.wave.Waveforms;
+import org.ringsweep.generators.deck.BatchEntry;
 import org.ringsweep.generators.deck.DeckOptions;
+import org.ringsweep.generators.deck.DeckWriteException;
 import org.ringsweep.generators.deck.DeckWriter;
 import org.ringsweep.generators.elaborate.EdgeEvent;
 import org.ringsweep.generators.elaborate.Elaboration;
@@ -21,6 +23,8 @@ import org.ringsweep.generators.elaborate.Elaborator;
 import org.ringsweep.generators.elaborate.ReceiverProbe;
 import org.ringsweep.generators.names.NodeNamer;
 import org.ringsweep.runner.engine.FailureKind;
+import org.ringsweep.runner.engine.NgspiceBatch;
+import org.ringsweep.runner.engine.NgspiceEngine;
 import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.engine.SimulationJob;
 import org.ringsweep.runner.engine.SimulationOutcome;
@@ -44,7 +48,8 @@ import org.ringsweep.runner.verdict.Violation;
  * collaborator is read-only once built, and each point writes only its own files.
  *
  * <p>Files: {@code OUT/<net>/<corner>-<nnnn>.cir} and, beside it, the raw file and the engine's
- * logs. Nothing else is written.
+ * logs; points run in a batch ({@link #runBatch}) add their circuit-only decks and the batch's
+ * master deck and logs. Nothing else is written.
  */
 public final class PointRunner {
     /**
@@ -159,12 +164,89 @@ public final class PointRunner {
 
     /** Runs a point already elaborated with {@link #elaborate}. */
     public ResultRecord run(Net net, PointSpec spec, Elaboration elab) {
-        Net applied = net.with(spec.overrides());
         SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine for run()"));
-        List<String> warnings = new ArrayList<>(elab.warnings());
         String stem = deckStem(spec);
         WrittenDeck written = writeDeck(net, elab, stem, false);
-        SimulationOutcome outcome = eng.run(job(written, stem, elab));
+        return finish(net, spec, elab, eng, stem, written, eng.run(job(written, stem, elab)));
+    }
+
+    /**
+     * Runs several points of one net, already elaborated, and gives their records in order. With
+     * ngspice the points share one process ({@link NgspiceBatch}): each point's standalone deck
+     * {@code <stem>.cir} is still written (the record names it, and it re-runs the point by hand),
+     * beside it the circuit-only deck {@code <raw stem>_circuit.cir} the batch sources, and the
+     * master deck {@code batch_<first raw stem>.cir} with its logs. A point whose deck cannot be
+     * written circuit-only (templates that keep the control block) runs alone, as does every
+     * point with another engine. The outcome of each point then goes through the very code of
+     * {@link #run(Net, PointSpec, Elaboration)} (the conservative retry, the measurements), and
+     * the batch runs every point it does not prove good again alone, so the records are those
+     * {@code run} gives point by point.
+     *
+     * @param net          the net
+     * @param specs        the points
+     * @param elaborations their elaborations ({@link #elaborate}), one per point, same order
+     * @return one record per point, same order
+     * @throws IllegalArgumentException when the lists differ in length
+     */
+    public List<ResultRecord> runBatch(Net net, List<PointSpec> specs, List<Elaboration> elaborations) {
+        if (specs.size() != elaborations.size()) {
+            throw new IllegalArgumentException(specs.size() + " points but " + elaborations.size() + " elaborations");
+        }
+        SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine for runBatch()"));
+        int n = specs.size();
+        ResultRecord[] records = new ResultRecord[n];
+        List<Integer> batched = new ArrayList<>();
+        List<NgspiceBatch.Point> points = new ArrayList<>();
+        List<WrittenDeck> decks = new ArrayList<>();
+        if (eng instanceof NgspiceEngine && n > 1) {
+            for (int i = 0; i < n; i++) {
+                Elaboration elab = elaborations.get(i);
+                String stem = deckStem(specs.get(i));
+                String raw = rawName(stem);
+                String circuitText;
+                String deckText;
+                try {
+                    deckText = deckWriter.render(elab.circuit(), new DeckOptions(raw, true, false));
+                    circuitText = deckWriter.renderCircuitOnly(elab.circuit(), new DeckOptions(raw, true, false));
+                } catch (DeckWriteException e) {
+                    continue; // runs alone below, where the same error becomes its record
+                }
+                WrittenDeck written = new WrittenDeck(netDir(net).resolve(stem + ".cir"), elab, deckText);
+                points.add(new NgspiceBatch.Point(job(written, stem, elab), raw.substring(0, raw.length() - 4) + "_circuit.cir", circuitText));
+                decks.add(written);
+                batched.add(i);
+            }
+        }
+        if (batched.size() > 1) {
+            List<BatchEntry> entries = new ArrayList<>();
+            for (int j = 0; j < points.size(); j++) {
+                NgspiceBatch.Point p = points.get(j);
+                // The probes in the circuit's order, as the standalone deck writes them.
+                entries.add(new BatchEntry(p.circuitDeckFileName(), p.job().rawFileName(),
+                        new ArrayList<>(decks.get(j).elaboration().circuit().probes().keySet())));
+            }
+            String first = points.get(0).job().rawFileName();
+            String master = "batch_" + first.substring(0, first.length() - 4) + ".cir";
+            NgspiceBatch batch = new NgspiceBatch(points, master, deckWriter.renderBatch(entries, true));
+            List<SimulationOutcome> outcomes = ((NgspiceEngine) eng).runBatch(batch);
+            for (int j = 0; j < batched.size(); j++) {
+                int i = batched.get(j);
+                String stem = deckStem(specs.get(i));
+                records[i] = finish(net, specs.get(i), elaborations.get(i), eng, stem, decks.get(j), outcomes.get(j));
+            }
+        }
+        List<ResultRecord> result = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            result.add(records[i] != null ? records[i] : run(net, specs.get(i), elaborations.get(i)));
+        }
+        return List.copyOf(result);
+    }
+
+    /** The first run's outcome to a record: the conservative retry when it failed, else the measurements. */
+    private ResultRecord finish(Net net, PointSpec spec, Elaboration elab, SimulationEngine eng, String stem,
+                                WrittenDeck written, SimulationOutcome outcome) {
+        Net applied = net.with(spec.overrides());
+        List<String> warnings = new ArrayList<>(elab.warnings());
         // An interrupted run (Ctrl-C, a stopping batch) is not retried: its record is discarded anyway.
         if (outcome instanceof SimulationOutcome.Failure first && isRetryable(first.kind()) && !Thread.currentThread().isInterrupted()) {
             String retryStem = stem + "-conservative";

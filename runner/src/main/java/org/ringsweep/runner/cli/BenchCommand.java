@@ -13,7 +13,8 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code ringsweep bench}: the benchmarks whose figures the README reports. */
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = "Run the benchmarks (raw-file reader throughput, orchestration overhead against bare ngspice).")
+        description = "Run the benchmarks (raw-file reader throughput, orchestration overhead against bare ngspice,"
+                + " points per ngspice process).")
 public final class BenchCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -39,6 +40,8 @@ public final class BenchCommand implements Callable<Integer> {
             return ExitCodes.SIMULATION;
         }
         out.println(OverheadBenchmark.run(work.resolve("overhead"), located.get().binary(), nets));
+        out.flush();
+        out.println(org.ringsweep.runner.bench.BatchBenchmark.run(work.resolve("batch"), located.get().binary()));
         return ExitCodes.OK;
     }
 }

@@ -44,6 +44,9 @@ import org.ringsweep.runner.raw.RawPlot;
  * from the first time point reported, has collapsed its time step: it is killed like a timed-out
  * run and fails as {@link FailureKind#STALLED}, naming the simulated time where it stuck.
  * Instances are immutable and thread-safe; each run keeps its watch to its own thread.
+ *
+ * <p>{@link #runBatch} runs several points in one process ({@link NgspiceBatch}) and runs every
+ * point it cannot prove good again alone with {@link #run}.
  */
 public final class NgspiceEngine implements SimulationEngine {
     /** Environment variable naming the ngspice binary (a path); else the first {@code ngspice} on {@code PATH}. */
@@ -193,16 +196,7 @@ public final class NgspiceEngine implements SimulationEngine {
             return failure(FailureKind.IO, "could not write the deck `" + job.deckFile() + "`: " + e.getMessage(),
                     "", Duration.ZERO);
         }
-        ProcessBuilder builder = new ProcessBuilder(binary.toString(), "-n", "-b", job.deckFileName())
-                .directory(job.workDir().toFile())
-                .redirectInput(ProcessBuilder.Redirect.PIPE)
-                .redirectOutput(job.stdoutFile().toFile())
-                .redirectError(job.stderrFile().toFile());
-        Map<String, String> env = builder.environment();
-        String home = job.workDir().toAbsolutePath().toString();
-        env.put("HOME", home); // ngspice looks for .spiceinit in HOME too; -n skips it, HOME keeps it private anyway
-        env.put("USERPROFILE", home);
-        env.put("LC_ALL", "C"); // numbers in ngspice's messages with a decimal point, whatever the user's locale
+        ProcessBuilder builder = builder(job.workDir(), job.deckFileName(), job.stdoutFile(), job.stderrFile());
 
         long start = System.nanoTime();
         Process process;
@@ -262,6 +256,33 @@ public final class NgspiceEngine implements SimulationEngine {
         return classify(job, process.exitValue(), stderr, log, elapsed);
     }
 
+    /** The ngspice command for one deck in {@code dir}: closed-off environment, console to files. */
+    ProcessBuilder builder(Path dir, String deckFileName, Path stdoutFile, Path stderrFile) {
+        ProcessBuilder builder = new ProcessBuilder(binary.toString(), "-n", "-b", deckFileName)
+                .directory(dir.toFile())
+                .redirectInput(ProcessBuilder.Redirect.PIPE)
+                .redirectOutput(stdoutFile.toFile())
+                .redirectError(stderrFile.toFile());
+        Map<String, String> env = builder.environment();
+        String home = dir.toAbsolutePath().toString();
+        env.put("HOME", home); // ngspice looks for .spiceinit in HOME too; -n skips it, HOME keeps it private anyway
+        env.put("USERPROFILE", home);
+        env.put("LC_ALL", "C"); // numbers in ngspice's messages with a decimal point, whatever the user's locale
+        return builder;
+    }
+
+    /**
+     * Runs several points in one ngspice process and falls back to one process per point for
+     * every point the batch does not prove good; see {@link NgspiceBatch} for the rules.
+     *
+     * @param batch the points, their circuit-only decks and the master deck
+     * @return one outcome per point, in the batch's order; each is what {@link #run} gives for
+     *         the point's job alone, or the batch's own success for a point proven good
+     */
+    public List<SimulationOutcome> runBatch(NgspiceBatch batch) {
+        return batch.runOn(this);
+    }
+
     private static SimulationOutcome classify(SimulationJob job, int exit, String stderr, String log, Duration elapsed) {
         Optional<NgspiceDiagnosis.Finding> finding = NgspiceDiagnosis.diagnose(stderr, job.deckFile().toString());
         if (finding.isPresent()) {
@@ -283,7 +304,7 @@ public final class NgspiceEngine implements SimulationEngine {
         return readOutput(job, log, elapsed);
     }
 
-    private static SimulationOutcome readOutput(SimulationJob job, String log, Duration elapsed) {
+    static SimulationOutcome readOutput(SimulationJob job, String log, Duration elapsed) {
         Path raw = job.rawFile();
         if (!Files.isRegularFile(raw)) {
             return failure(FailureKind.MISSING_OUTPUT, "ngspice finished without writing the raw file `" + raw
@@ -380,7 +401,7 @@ public final class NgspiceEngine implements SimulationEngine {
     }
 
     /** Closes ngspice's standard input at once, so it can never wait for input. */
-    private static void closeInput(Process process) {
+    static void closeInput(Process process) {
         try {
             process.getOutputStream().close();
         } catch (IOException e) {
@@ -414,7 +435,7 @@ public final class NgspiceEngine implements SimulationEngine {
     }
 
     /** A console log as text; of a very big file only the head and the tail (where the verdict is). */
-    private static String readLog(Path file) throws IOException {
+    static String readLog(Path file) throws IOException {
         if (!Files.exists(file)) {
             return "";
         }
@@ -441,7 +462,7 @@ public final class NgspiceEngine implements SimulationEngine {
     }
 
     /** The start of both console streams without the progress ticker, for messages and reports. */
-    private static String excerpt(String stdout, String stderr) {
+    static String excerpt(String stdout, String stderr) {
         return "--- ngspice stdout ---\n" + shorten(stdout) + "\n--- ngspice stderr ---\n"
                 + shorten(TICKER.matcher(stderr).replaceAll("").replace('\r', '\n'));
     }
@@ -463,7 +484,7 @@ public final class NgspiceEngine implements SimulationEngine {
         return e < 0 ? mantissa : mantissa + s.substring(e);
     }
 
-    private static String seconds(Duration d) {
+    static String seconds(Duration d) {
         return String.format(Locale.ROOT, "%.3g s", d.toNanos() / 1e9);
     }
 }

@@ -62,6 +62,7 @@ final class StallWatch {
     private final Path rawFile;
     private final double stopTime;
     private final long stallNanos;
+    private final long ignoreBefore;
 
     private long seenSize = -1;
     private boolean over;
@@ -79,10 +80,21 @@ final class StallWatch {
      * @param stallTimeout wall-clock time without progress after which the run counts as stalled
      */
     StallWatch(Path stderrFile, Path rawFile, double stopTime, Duration stallTimeout) {
+        this(stderrFile, rawFile, stopTime, stallTimeout, 0);
+    }
+
+    /**
+     * A watch for one point of a batch, which shares its standard error with the points before it.
+     *
+     * @param ignoreBefore bytes at the start of {@code stderrFile} that belong to earlier points
+     *                     and are never read; the other parameters as for the one-run watch
+     */
+    StallWatch(Path stderrFile, Path rawFile, double stopTime, Duration stallTimeout, long ignoreBefore) {
         this.stderrFile = Objects.requireNonNull(stderrFile, "stderrFile");
         this.rawFile = Objects.requireNonNull(rawFile, "rawFile");
         this.stopTime = stopTime;
         this.stallNanos = stallTimeout.toNanos();
+        this.ignoreBefore = ignoreBefore;
     }
 
     /**
@@ -125,11 +137,11 @@ final class StallWatch {
         OptionalDouble value;
         try {
             long size = Files.size(stderrFile);
-            if (size == seenSize) {
-                return; // nothing new printed
+            if (size == seenSize || size <= ignoreBefore) {
+                return; // nothing new printed (for this point)
             }
             seenSize = size;
-            value = lastReferenceValue(tail(stderrFile, size));
+            value = lastReferenceValue(tail(stderrFile, size, ignoreBefore));
         } catch (NoSuchFileException e) {
             return;
         } catch (IOException e) {
@@ -147,9 +159,9 @@ final class StallWatch {
         }
     }
 
-    /** The last {@value #TAIL_BYTES} bytes of a file of {@code size} bytes, one char per byte. */
-    private static String tail(Path file, long size) throws IOException {
-        int n = (int) Math.min(TAIL_BYTES, size);
+    /** The last {@value #TAIL_BYTES} bytes of a file of {@code size} bytes, none before {@code from}, one char per byte. */
+    private static String tail(Path file, long size, long from) throws IOException {
+        int n = (int) Math.min(TAIL_BYTES, size - from);
         ByteBuffer buffer = ByteBuffer.allocate(n);
         try (SeekableByteChannel ch = Files.newByteChannel(file)) {
             ch.position(size - n);

@@ -10,6 +10,9 @@
  * time point ({@link org.ringsweep.runner.engine.FailureKind#STALLED}, a time step collapse that
  * a retry with conservative options usually cures). Both kill the engine's whole process tree.
  *
+ * <p>{@link org.ringsweep.runner.engine.NgspiceBatch} runs several points in one ngspice process
+ * and falls back to one process per point for every point the batch does not prove good.
+ *
  * <p>Tier: internal (used by the runner's commands; not a plugin API).
  */
 package org.ringsweep.runner.engine;

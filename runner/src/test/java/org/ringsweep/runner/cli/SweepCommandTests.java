@@ -21,6 +21,8 @@ import java.util.Map;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.ringsweep.runner.testing.Ngspice;
 
 /** {@code ringsweep sweep} and {@code results}: resume after SIGKILL, job-count independence, failing points. */
@@ -100,8 +102,35 @@ class SweepCommandTests {
         }
     }
 
-    private Map<String, JsonNode> byPoint(Path out, String jobs) throws IOException {
-        CliRun run = CliRun.of("sweep", sweep("p2p-small.yaml"), "--out", out.toString(), "--jobs", jobs, "--quiet");
+    @Test
+    void batchedAndUnbatchedSweepsGiveIdenticalRecords() throws Exception {
+        Ngspice.require();
+        Map<String, JsonNode> alone = byPoint(work.resolve("alone"), "1", "--batch", "1");
+        Map<String, JsonNode> batched = byPoint(work.resolve("batched"), "1", "--batch", "4");
+        Map<String, JsonNode> twoWorkers = byPoint(work.resolve("two"), "2", "--batch", "8");
+        assertEquals(6, alone.size());
+        assertEquals(alone, batched);
+        assertEquals(alone, twoWorkers);
+        // The batches really ran: master decks beside the points' decks, and each record's deck exists.
+        try (var files = Files.walk(work.resolve("batched"))) {
+            assertEquals(2, files.filter(f -> f.getFileName().toString().matches("batch_.*\\.cir")).count(), "4 + 2 points");
+        }
+        for (JsonNode r : batched.values()) {
+            assertTrue(Files.isRegularFile(work.resolve("batched").resolve(r.get("deck").asText())), r.toString());
+        }
+    }
+
+    @Test
+    void batchSizeBelowOneIsAnInputError() {
+        CliRun run = CliRun.of("sweep", sweep("p2p-small.yaml"), "--out", work.resolve("out").toString(), "--batch", "0");
+        assertEquals(ExitCodes.INPUT, run.exitCode());
+        assertTrue(run.err().contains("--batch"), run.err());
+    }
+
+    private Map<String, JsonNode> byPoint(Path out, String jobs, String... more) throws IOException {
+        List<String> args = new java.util.ArrayList<>(List.of("sweep", sweep("p2p-small.yaml"), "--out", out.toString(), "--jobs", jobs, "--quiet"));
+        args.addAll(List.of(more));
+        CliRun run = CliRun.of(args.toArray(String[]::new));
         assertTrue(run.exitCode() == ExitCodes.OK || run.exitCode() == ExitCodes.VIOLATION, run.err());
         Map<String, JsonNode> map = new HashMap<>();
         for (String line : Files.readAllLines(out.resolve("results.jsonl"))) {
@@ -113,23 +142,26 @@ class SweepCommandTests {
         return map;
     }
 
-    @Test
-    void failingAndHangingPointsBecomeErrorRecordsWhileTheOthersPass() throws Exception {
+    @ParameterizedTest(name = "--batch {0}")
+    @ValueSource(strings = {"1", "3"})
+    void failingAndHangingPointsBecomeErrorRecordsWhileTheOthersPass(String batch) throws Exception {
         Path real = Ngspice.require();
         // A stand-in for ngspice that fails the 13 ohm deck as a parse error and hangs on the 47 ohm
-        // one; every other deck goes to the real ngspice.
+        // one; every other deck goes to the real ngspice. A batch's master deck counts as the decks it
+        // sources, so the batch fails or hangs as a whole and the engine falls back to one run per point.
         Path script = work.resolve("fake-ngspice");
         Files.writeString(script, "#!/bin/bash\n"
                 + "deck=\"${@: -1}\"\n"
                 + "if [ \"$1\" = \"-v\" ]; then exec " + real + " -v; fi\n"
-                + "if grep -q '^Rr1 .* 1.3e+01' \"$deck\"; then echo 'Error on line 7 or its substitute:' >&2;"
+                + "files=\"$deck $(sed -n 's/^source //p' \"$deck\" 2>/dev/null)\"\n"
+                + "if cat $files | grep -q '^Rr1 .* 1.3e+01'; then echo 'Error on line 7 or its substitute:' >&2;"
                 + " echo 'Error: circuit not parsed.' >&2; exit 1; fi\n"
-                + "if grep -q '^Rr1 .* 4.7e+01' \"$deck\"; then sleep 60; fi\n"
+                + "if cat $files | grep -q '^Rr1 .* 4.7e+01'; then sleep 60; fi\n"
                 + "exec " + real + " \"$@\"\n");
         Files.setPosixFilePermissions(script, PosixFilePermissions.fromString("rwxr-xr-x"));
         Path out = work.resolve("out");
         Process p = child(Map.of("RINGSWEEP_NGSPICE", script.toString()),
-                "sweep", sweep("p2p-small.yaml"), "--out", out.toString(), "--jobs", "2", "--timeout", "2");
+                "sweep", sweep("p2p-small.yaml"), "--out", out.toString(), "--jobs", "2", "--timeout", "2", "--batch", batch);
         assertTrue(p.waitFor(120, TimeUnit.SECONDS), "the sweep went on past the hanging point");
         assertEquals(ExitCodes.SIMULATION, p.exitValue());
         Map<Double, JsonNode> byValue = new HashMap<>();
