@@ -143,7 +143,7 @@ public final class Ipc356Reader {
         if (unconnected > 0) {
             notes.add(unconnected + " pin record(s) on no net (blank or N/C) not read");
         }
-        skipped.forEach((what, n) -> notes.add(n + " " + what + " skipped"));
+        skipped.forEach((what, n) -> notes.add(what + ": " + n + " skipped"));
         return new Netlist(label, KIND, List.copyOf(byPoint.values()), notes);
     }
 
