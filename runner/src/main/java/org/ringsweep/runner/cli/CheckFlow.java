@@ -64,6 +64,12 @@ final class CheckFlow {
         Map<Net, List<PointRunner.PointSpec>> plan = new LinkedHashMap<>();
         Map<Net, Map<PointRunner.PointSpec, Elaboration>> elaborated = new java.util.IdentityHashMap<>();
         List<String> problems = new ArrayList<>();
+        try {
+            files = NetFiles.expand(files); // a folder (e.g. from import) stands for its *.yaml files
+        } catch (InputException e) {
+            err.println("ringsweep: " + e.getMessage());
+            return new Outcome(ExitCodes.INPUT, List.of());
+        }
         for (Path file : files) {
             try {
                 Net net = loader.load(file);
@@ -144,6 +150,9 @@ final class CheckFlow {
         }
         if (!common.json) {
             ResultTable.print(records, out, common.quiet);
+            if (records.stream().map(ResultRecord::net).distinct().count() > 1) {
+                BatchSummary.print(records, out);
+            }
             if (!common.quiet) {
                 out.println();
                 out.println(Caution.TEXT);
