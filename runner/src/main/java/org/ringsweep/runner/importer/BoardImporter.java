@@ -11,7 +11,6 @@ import java.util.Deque;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -195,7 +194,7 @@ public final class BoardImporter {
             List<NetFileWriter.SegmentText> segments = new ArrayList<>();
             boolean estimated;
             List<LengthRow> rows = new ArrayList<>();
-            new LinkedHashSet<>(prepend(name, pieces)).forEach(p -> rows.addAll(lengths.getOrDefault(p, List.of())));
+            pieces.forEach(p -> rows.addAll(lengths.getOrDefault(p, List.of()))); // pieces in netlist order
             if (!rows.isEmpty()) {
                 estimated = false;
                 Set<String> ends = new HashSet<>();
@@ -287,12 +286,6 @@ public final class BoardImporter {
             }
         }
         return segments;
-    }
-
-    private static List<String> prepend(String first, List<String> rest) {
-        List<String> l = new ArrayList<>(List.of(first));
-        l.addAll(rest);
-        return l;
     }
 
     private static String freshRef(Set<String> used) {
