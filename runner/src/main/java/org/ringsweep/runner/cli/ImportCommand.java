@@ -67,6 +67,9 @@ public final class ImportCommand implements Callable<Integer> {
             report.errors().forEach(e -> err.println("ringsweep: " + e));
             return ExitCodes.INPUT;
         }
+        if (!report.made().isEmpty()) {
+            o.printf("next: ringsweep screen %s   (then: ringsweep check %s)%n", out, out);
+        }
         return ExitCodes.OK;
     }
 

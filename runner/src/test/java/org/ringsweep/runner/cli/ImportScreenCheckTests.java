@@ -87,6 +87,23 @@ class ImportScreenCheckTests {
     }
 
     @Test
+    void aCsvPinListImportsLikeTheIpcFileOfTheSameBoard() throws IOException {
+        // kestrel-fc2-pins.csv places SPI0_SCK and SPI0_CS_FLASH where kestrel-fc2.ipc does (in mm and mil).
+        Path fromCsv = tmp.resolve("csv");
+        Path fromIpc = tmp.resolve("ipc");
+        String board = DemoBoard.file("board.yaml").toString();
+        CliRun csv = CliRun.of("import", DemoBoard.file("kestrel-fc2-pins.csv").toString(), "--board", board, "--out", fromCsv.toString());
+        assertEquals(0, csv.exitCode(), csv.err());
+        assertTrue(csv.out().contains("csv netlist, 8 pin(s) on 3 net(s)"), csv.out());
+        assertEquals(0, CliRun.of("import", DemoBoard.file("kestrel-fc2.ipc").toString(), "--board", board, "--out", fromIpc.toString()).exitCode());
+        for (String net : List.of("SPI0_SCK.yaml", "SPI0_CS_FLASH.yaml")) {
+            String a = Files.readString(fromCsv.resolve(net));
+            String b = Files.readString(fromIpc.resolve(net));
+            assertEquals(b.substring(b.indexOf("format:")), a.substring(a.indexOf("format:")), net);
+        }
+    }
+
+    @Test
     void theTopLevelHelpListsImportAndScreen() {
         CliRun r = CliRun.of("--help");
         assertTrue(r.out().contains("import") && r.out().contains("screen"), r.out());
