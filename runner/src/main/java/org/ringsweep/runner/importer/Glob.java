@@ -10,8 +10,9 @@ import java.util.regex.Pattern;
  *
  * @param text the pattern as written
  */
-record Glob(String text) {
-    Pattern regex() {
+public record Glob(String text) {
+    /** The pattern as a regular expression. */
+    public Pattern regex() {
         StringBuilder b = new StringBuilder();
         for (char c : text.toCharArray()) {
             if (c == '*') {
@@ -25,12 +26,13 @@ record Glob(String text) {
         return Pattern.compile(b.toString(), Pattern.CASE_INSENSITIVE | Pattern.UNICODE_CASE);
     }
 
-    boolean matches(String name) {
+    /** Whether the whole {@code name} matches. */
+    public boolean matches(String name) {
         return regex().matcher(name).matches();
     }
 
     /** The first pattern of {@code globs} matching {@code name}, or null. */
-    static Glob first(List<Glob> globs, String name) {
+    public static Glob first(List<Glob> globs, String name) {
         for (Glob g : globs) {
             if (g.matches(name)) {
                 return g;
