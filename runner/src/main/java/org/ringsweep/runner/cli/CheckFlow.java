@@ -76,6 +76,12 @@ final class CheckFlow {
         // Points whose plugin model threw while elaborating: error records, not input errors.
         Map<Net, Map<PointRunner.PointSpec, PluginFailureException>> failed = new java.util.IdentityHashMap<>();
         List<String> problems = new ArrayList<>();
+        try {
+            files = NetFiles.expand(files); // a folder (e.g. from import) stands for its *.yaml files
+        } catch (InputException e) {
+            err.println("ringsweep: " + e.getMessage());
+            return new Outcome(ExitCodes.INPUT, List.of());
+        }
         for (Path file : files) {
             try {
                 Net net = loader.load(file);
@@ -171,6 +177,9 @@ final class CheckFlow {
         }
         if (!common.json) {
             ResultTable.print(records, out, common.quiet);
+            if (records.stream().map(ResultRecord::net).distinct().count() > 1) {
+                BatchSummary.print(records, out);
+            }
             if (!common.quiet) {
                 out.println();
                 out.println(Caution.TEXT);
