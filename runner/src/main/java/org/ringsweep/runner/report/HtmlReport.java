@@ -282,7 +282,31 @@ final class HtmlReport {
             new SweepMetric("ringback", "worst ringback margin", "V", 1, true),
             new SweepMetric("settle", "longest settle", "ns", 1e9, false));
 
-    private void sweep(StringBuilder b, String net, List<ResultRecord> records) {
+    /** Sweep points in point order: corner, then the swept values by path name (as the store's point order). */
+    private static final Comparator<ResultRecord> POINT_ORDER = (a, c) -> {
+        int k = a.corner().compareTo(c.corner());
+        if (k != 0) {
+            return k;
+        }
+        var ia = new TreeMap<>(a.point()).entrySet().iterator();
+        var ic = new TreeMap<>(c.point()).entrySet().iterator();
+        while (ia.hasNext() && ic.hasNext()) {
+            var ea = ia.next();
+            var ec = ic.next();
+            k = ea.getKey().compareTo(ec.getKey());
+            if (k == 0) {
+                k = Double.compare(ea.getValue(), ec.getValue());
+            }
+            if (k != 0) {
+                return k;
+            }
+        }
+        return Boolean.compare(ia.hasNext(), ic.hasNext());
+    };
+
+    private void sweep(StringBuilder b, String net, List<ResultRecord> unordered) {
+        List<ResultRecord> records = new ArrayList<>(unordered);
+        records.sort(POINT_ORDER);
         String bestKey = run.best().get(net);
         ResultRecord best = bestKey == null ? null : records.stream().filter(r -> PointKey.of(r).equals(bestKey)).findFirst().orElse(null);
         String bestWord = run.kind() == ReportRun.Kind.TUNE ? "recommended" : "best";

@@ -249,7 +249,8 @@ final class SvgPlot {
             double py = sy.at(m.y());
             b.append("<circle class=\"mark\" cx=\"").append(c(px)).append("\" cy=\"").append(c(py))
                     .append("\" r=\"8\" fill=\"none\" stroke=\"#000\" stroke-width=\"2\"/>\n");
-            b.append("<text class=\"mark-label\" x=\"").append(c(px + 10)).append("\" y=\"").append(c(py - 10)).append("\">")
+            double ly = py - 10 < TOP + 10 ? py + 18 : py - 10; // below the ring when it sits at the top
+            b.append("<text class=\"mark-label\" x=\"").append(c(px + 10)).append("\" y=\"").append(c(ly)).append("\">")
                     .append(Xml.escape(m.label())).append("</text>\n");
         }
         refLabels(b, sx, sy, aw);
