@@ -24,6 +24,10 @@ final class ReportStep {
             }
         } catch (ReportException e) {
             err.println("ringsweep: report: " + e.getMessage());
+        } catch (RuntimeException e) {
+            // A defect in the report code must not hide the run's own verdict and exit code.
+            err.println("ringsweep: report: report.html and junit.xml could not be written (internal error: " + e
+                    + "); the results are in --out, and `ringsweep report OUT_DIR` can try again");
         }
         err.flush();
     }
