@@ -9,7 +9,10 @@ public final class ReportException extends RuntimeException {
         super(message);
     }
 
-    /** @param message what went wrong, naming the file; @param cause the underlying failure */
+    /**
+     * @param message what went wrong, naming the file
+     * @param cause   the underlying failure
+     */
     public ReportException(String message, Throwable cause) {
         super(message, cause);
     }
