@@ -211,6 +211,7 @@ public final class SweepCommand implements Callable<Integer> {
             }
             List<StoredRow> rows = store.rows();
             writeJsonLines(rows);
+            ReportStep.run(err, common.quiet, () -> org.ringsweep.runner.report.Reports.afterSweep(common.out, store));
             if (!common.quiet) {
                 summary(store, plans, out);
             }
