@@ -43,7 +43,7 @@ class OpenDrainThroughNgspiceTests {
 
     @Test
     void riseBetweenI2cThresholdsIsLnSevenThirdsTimesRc() throws IOException {
-        JsonNode r = check("physics/open-drain-i2c.yaml", "1us");
+        JsonNode r = check("physics/open-drain-i2c.yaml.in", "1us");
         JsonNode rise = r.get("receivers").get(0).get("rise");
         // lines-and-terminations.md §7: 0.8473 · 4.7 kΩ · 100 pF = 398.2 ns (I²C's 30–70 % t_r)
         assertEquals(398.2e-9, rise.get("rise_time_s").asDouble(), 0.01 * 398.2e-9);
@@ -69,18 +69,18 @@ class OpenDrainThroughNgspiceTests {
     void riseMaxFailsJustBelowTheRcRiseTimeAndPassesJustAbove() throws IOException {
         // 398.2 ns (lines-and-terminations.md §7) + 0.14 % for the trace: about 398.8 ns; hand-chosen limits
         // 390 ns (fails) and 410 ns (passes), each 2–3 % from the expected value
-        JsonNode fail = check("physics/open-drain-i2c.yaml", "390ns");
+        JsonNode fail = check("physics/open-drain-i2c.yaml.in", "390ns");
         assertEquals("fail", fail.get("verdict").asText(), fail.toString());
         JsonNode v = fail.get("receivers").get(0).get("violations").get(0);
         assertEquals("rise_max", v.get("limit").asText(), fail.toString());
         assertEquals(1, fail.get("receivers").get(0).get("violations").size(), fail.toString());
-        JsonNode pass = check("physics/open-drain-i2c.yaml", "410ns");
+        JsonNode pass = check("physics/open-drain-i2c.yaml.in", "410ns");
         assertEquals("pass", pass.get("verdict").asText(), pass.toString());
     }
 
     @Test
     void theI2cWindowIsReportedForTheBus() throws IOException {
-        JsonNode r = check("physics/open-drain-i2c.yaml", "1us");
+        JsonNode r = check("physics/open-drain-i2c.yaml.in", "1us");
         String warnings = r.get("warnings").toString();
         // lines-and-terminations.md §7: Fast-mode at ~100 pF allows up to 3540.7 Ω (3.3 V, 3 mA ⇒ at least 966.7 Ω),
         // so 4.7 kΩ is outside it; the 0.14 pF of trace moves R_p(max) to 3535.7 Ω
