@@ -7,27 +7,31 @@ import org.ringsweep.api.model.ModelDescriptor;
 import org.ringsweep.api.model.ReceiverModel;
 
 /**
- * The built-in models: {@code ramp} (driver, {@link RampDriverModel}) and {@code cmos}
- * (receiver, {@link CmosReceiverModel}). Each descriptor is also the model's implementation.
+ * The built-in models: {@code ramp} (driver, {@link RampDriverModel}), {@code cmos}
+ * (receiver, {@link CmosReceiverModel}) and {@code ibis} (driver {@link IbisDriverModel} and
+ * receiver {@link IbisReceiverModel}). Each descriptor is also the model's implementation.
  */
 public final class BuiltinModels implements ModelCatalog {
     /** The built-in ramp driver id. */
     public static final String RAMP = "ramp";
     /** The built-in CMOS receiver id. */
     public static final String CMOS = "cmos";
+    /** The built-in IBIS driver and receiver id. */
+    public static final String IBIS = "ibis";
 
     /** The built-in driver models. */
     public static List<DriverModel> drivers() {
-        return List.of(RampDriverModel.INSTANCE);
+        return List.of(RampDriverModel.INSTANCE, IbisDriverModel.INSTANCE);
     }
 
     /** The built-in receiver models. */
     public static List<ReceiverModel> receivers() {
-        return List.of(CmosReceiverModel.INSTANCE);
+        return List.of(CmosReceiverModel.INSTANCE, IbisReceiverModel.INSTANCE);
     }
 
     @Override
     public List<ModelDescriptor> all() {
-        return List.of(RampDriverModel.INSTANCE, CmosReceiverModel.INSTANCE);
+        return List.of(RampDriverModel.INSTANCE, IbisDriverModel.INSTANCE, CmosReceiverModel.INSTANCE,
+                IbisReceiverModel.INSTANCE);
     }
 }

@@ -28,6 +28,7 @@ public final class ModelsCommand implements Callable<Integer> {
                     case RAIL -> "rail";
                     case WORD -> String.join("|", new java.util.TreeSet<>(p.words()));
                     case FLAG -> "true|false";
+                    case TEXT -> "text";
                 };
                 String dflt = p.required() ? "required" : p.defaultText().isEmpty() ? "optional" : "default " + p.defaultText();
                 out.printf("    %-10s %-18s %-16s %s%n", p.key(), unit, dflt, p.description());

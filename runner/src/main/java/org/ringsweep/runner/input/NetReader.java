@@ -226,6 +226,7 @@ final class NetReader {
             case RAIL -> rails.size() > 1 ? rails.stream().skip(1).findFirst().orElseThrow() : "VCC";
             case WORD -> spec.words().stream().sorted().findFirst().orElse("");
             case FLAG -> "true";
+            case TEXT -> "parts/demo.ibs";
         };
     }
 
