@@ -84,8 +84,7 @@ public final class IbisDriverModel implements DriverModel {
         IbisSelection s = IbisSelection.of(driver);
         IbisModel m = s.model();
         if (m.isInputOnly() || m.modelType().equalsIgnoreCase("Terminator")) {
-            throw new ModelParameterException(m.name().equals(driver.parameters().get("ibis_model").map(v -> v.display()).orElse(""))
-                    ? "ibis_model" : "file", "IBIS model `" + m.name() + "` is of type " + m.modelType() + " and cannot drive; expected an output or I/O model");
+            throw new ModelParameterException(driver.parameters().has("ibis_model") ? "ibis_model" : "ibis_pin", "IBIS model `" + m.name() + "` is of type " + m.modelType() + " and cannot drive; expected an output or I/O model");
         }
         if (m.ramp() == null) {
             throw new ModelParameterException("file", "IBIS model `" + m.name() + "` has no [Ramp]; expected one to time its edges");
