@@ -304,6 +304,25 @@ class IbisModelsTests {
     }
 
     @Test
+    void manyThreadsReadingOneFileAllGetTheSameContent(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("kx32.ibs");
+        Files.copy(Path.of("..", "examples", "demo-board", "parts", "kx32.ibs"), f);
+        var pool = java.util.concurrent.Executors.newFixedThreadPool(8);
+        try {
+            List<java.util.concurrent.Future<org.ringsweep.generators.ibis.IbisFile>> all = new ArrayList<>();
+            for (int i = 0; i < 32; i++) {
+                all.add(pool.submit(() -> IbisSelection.load(f)));
+            }
+            var first = all.get(0).get();
+            for (var r : all) {
+                assertEquals(first, r.get());
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    @Test
     void theFileIsRelativeToTheNetFile() {
         assertEquals(Path.of("boards/parts/a.ibs"), IbisSelection.resolve(new Location("boards/net.yaml", 1, 1), "parts/a.ibs"));
         assertEquals(Path.of("/abs/a.ibs"), IbisSelection.resolve(new Location("boards/net.yaml", 1, 1), "/abs/a.ibs"));
