@@ -44,9 +44,9 @@ public record IbisModel(String name, String modelType, String polarity, double v
         falling = List.copyOf(falling);
     }
 
-    /** The pull-up supply (V): {@code [Pullup Reference]}, else {@code [Voltage Range]}. */
+    /** The pull-up supply (V): {@code [Pullup Reference]}, else {@code [Voltage Range]}, else NaN. */
     public double pullupReference(IbisCorner c) {
-        return pullupRef != null ? pullupRef.get(c) : voltageRange.get(c);
+        return pullupRef != null ? pullupRef.get(c) : voltageRange != null ? voltageRange.get(c) : Double.NaN;
     }
 
     /** The pull-down reference (V): {@code [Pulldown Reference]}, else 0. */
@@ -54,9 +54,9 @@ public record IbisModel(String name, String modelType, String polarity, double v
         return pulldownRef != null ? pulldownRef.get(c) : 0;
     }
 
-    /** The power-clamp reference (V): {@code [POWER Clamp Reference]}, else {@code [Voltage Range]}. */
+    /** The power-clamp reference (V): {@code [POWER Clamp Reference]}, else {@code [Voltage Range]}, else NaN. */
     public double powerClampReference(IbisCorner c) {
-        return powerClampRef != null ? powerClampRef.get(c) : voltageRange.get(c);
+        return powerClampRef != null ? powerClampRef.get(c) : voltageRange != null ? voltageRange.get(c) : Double.NaN;
     }
 
     /** The ground-clamp reference (V): {@code [GND Clamp Reference]}, else 0. */

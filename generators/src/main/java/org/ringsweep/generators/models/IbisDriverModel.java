@@ -41,6 +41,7 @@ import org.ringsweep.generators.ibis.IbisTable;
  * slew into that load; into other loads the shape follows from the tables.
  * {@code [Rising Waveform]}/{@code [Falling Waveform]} tables are read but not used yet.
  * Package parasitics ({@code [Package]}, {@code [Pin]} R/L/C) are not added: model them as parts.
+ * ECL model types (whose pull-down is Vcc-relative) are rejected for now.
  *
  * <p>Parameters: {@code file} (relative to the net file), {@code ibis_model} or
  * {@code component} + {@code ibis_pin}, {@code ibis_corner} (typ, min, max; default typ).
@@ -86,6 +87,11 @@ public final class IbisDriverModel implements DriverModel {
         if (m.isInputOnly() || m.modelType().equalsIgnoreCase("Terminator")) {
             throw new ModelParameterException(driver.parameters().has("ibis_model") ? "ibis_model" : "ibis_pin", "IBIS model `" + m.name() + "` is of type " + m.modelType() + " and cannot drive; expected an output or I/O model");
         }
+        if (m.modelType().toUpperCase(java.util.Locale.ROOT).contains("ECL")) {
+            // ECL pull-down tables are Vcc-relative too (impedance-and-standards.md §7); not built yet.
+            throw new ModelParameterException(driver.parameters().has("ibis_model") ? "ibis_model" : "ibis_pin", "IBIS model `"
+                    + m.name() + "` is of type " + m.modelType() + "; ECL drivers are not supported yet; expected a CMOS-style output or I/O model");
+        }
         if (m.ramp() == null) {
             throw new ModelParameterException("file", "IBIS model `" + m.name() + "` has no [Ramp]; expected one to time its edges");
         }
@@ -100,6 +106,10 @@ public final class IbisDriverModel implements DriverModel {
         IbisSelection s = driving(driver);
         double low = s.model().pulldownReference(s.corner());
         double high = s.model().pullupReference(s.corner());
+        if (Double.isNaN(high)) {
+            throw new ModelParameterException("file", "IBIS model `" + s.model().name()
+                    + "` gives neither [Voltage Range] nor [Pullup Reference]; expected one for the driven high level");
+        }
         if (!(high > low)) {
             throw new ModelParameterException("file", "IBIS model `" + s.model().name() + "`: pull-up reference `" + high
                     + "` V must be above the pull-down reference `" + low + "` V");
@@ -133,6 +143,7 @@ public final class IbisDriverModel implements DriverModel {
     @Override
     public void elaborate(Driver driver, DriverContext ctx) {
         IbisSelection s = driving(driver);
+        swing(driver, ctx.rails()); // checks the references
         s.file().warnings().forEach(ctx::warn);
         IbisModel m = s.model();
         IbisCorner c = s.corner();

@@ -292,6 +292,26 @@ class IbisModelsTests {
     }
 
     @Test
+    void anEclDriverIsRejectedRatherThanBuiltWithTheWrongReference(@TempDir Path dir) throws Exception {
+        Files.writeString(dir.resolve("ecl.ibs"), "[IBIS Ver] 3.2\n[Model] e\nModel_type Output_ECL\nC_comp 1p 1p 1p\n"
+                + "[Voltage Range] 3.3 3 3.6\n[Pulldown]\n-1 0 0 0\n0 0.01 NA NA\n[Ramp]\ndV/dt_r 1/1n NA NA\ndV/dt_f 1/1n NA NA\n[End]\n");
+        Driver d = new Driver("U1.1", "ibis", params("file", "ecl.ibs", "ibis_model", "e"),
+                new Location(dir.resolve("net.yaml").toString(), 4, 3));
+        String msg = elaborationError(d).getMessage();
+        assertTrue(msg.contains("ECL") && msg.contains("ibis_model"), msg);
+    }
+
+    @Test
+    void anOpenDrainModelWithoutASupplyIsAnErrorNamingWhatIsMissing(@TempDir Path dir) throws Exception {
+        Files.writeString(dir.resolve("od.ibs"), "[IBIS Ver] 3.2\n[Model] od\nModel_type Open_drain\nC_comp 1p 1p 1p\n"
+                + "[Pulldown]\n-1 0 0 0\n0 0 NA NA\n1 0.01 NA NA\n[Ramp]\ndV/dt_r 1/1n NA NA\ndV/dt_f 1/1n NA NA\n[End]\n");
+        Driver d = new Driver("U1.1", "ibis", params("file", "od.ibs", "ibis_model", "od"),
+                new Location(dir.resolve("net.yaml").toString(), 4, 3));
+        String msg = elaborationError(d).getMessage();
+        assertTrue(msg.contains("[Voltage Range]") && msg.contains("[Pullup Reference]"), msg);
+    }
+
+    @Test
     void parsedFilesAreCachedUntilTheyChange(@TempDir Path dir) throws Exception {
         Path f = dir.resolve("c.ibs");
         Files.writeString(f, "[IBIS Ver] 3.2\n[End]\n");
