@@ -207,7 +207,7 @@ public final class IbisParser {
                 case "component" -> {
                     closeModel();
                     closeComponent();
-                    component = new ComponentDraft(requireArg(arg, n, "the component name"), n);
+                    component = new ComponentDraft(requireArg(arg, n, "the component name"));
                     section = Section.COMPONENT;
                 }
                 case "manufacturer" -> {
@@ -235,7 +235,7 @@ public final class IbisParser {
                 }
                 case "rising waveform", "falling waveform" -> {
                     requireModel(n);
-                    waveform = new WaveformDraft(keywordNorm.startsWith("rising"), n);
+                    waveform = new WaveformDraft(keywordNorm.startsWith("rising"));
                     section = Section.WAVEFORM;
                 }
                 case "ramp" -> {
@@ -243,7 +243,7 @@ public final class IbisParser {
                     if (model.ramp != null) {
                         duplicate(n);
                     }
-                    ramp = new RampDraft(n);
+                    ramp = new RampDraft();
                     section = Section.RAMP;
                 }
                 default -> {
@@ -258,7 +258,7 @@ public final class IbisParser {
                         if (model.tables.containsKey(keywordNorm)) {
                             duplicate(n);
                         }
-                        table = new TableDraft(kw, n);
+                        table = new TableDraft(kw);
                         section = Section.TABLE;
                     } else {
                         warnings.add(file + ":" + n + ": keyword " + kw + " is not supported; its data was skipped");
@@ -608,7 +608,7 @@ public final class IbisParser {
             final List<Double> max = new ArrayList<>();
             final String kw;
 
-            TableDraft(String kw, int line) {
+            TableDraft(String kw) {
                 this.kw = kw;
             }
 
@@ -631,7 +631,7 @@ public final class IbisParser {
             final Map<String, IbisRange> pkg = new LinkedHashMap<>();
             final List<IbisPin> pins = new ArrayList<>();
 
-            ComponentDraft(String name, int line) {
+            ComponentDraft(String name) {
                 this.name = name;
             }
         }
@@ -663,9 +663,6 @@ public final class IbisParser {
             IbisRange fallDv;
             IbisRange fallDt;
             double rLoad = IbisRamp.DEFAULT_R_LOAD;
-
-            RampDraft(int line) {
-            }
         }
 
         /** A waveform being read. */
@@ -674,9 +671,9 @@ public final class IbisParser {
             final Map<String, Double> params = new LinkedHashMap<>();
             final TableDraft table;
 
-            WaveformDraft(boolean rising, int line) {
+            WaveformDraft(boolean rising) {
                 this.rising = rising;
-                this.table = new TableDraft(rising ? "[Rising Waveform]" : "[Falling Waveform]", line);
+                this.table = new TableDraft(rising ? "[Rising Waveform]" : "[Falling Waveform]");
             }
         }
     }
