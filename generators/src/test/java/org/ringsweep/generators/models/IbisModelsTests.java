@@ -125,7 +125,7 @@ class IbisModelsTests {
 
     /** Driver, a 1 ps line (a tiny pi section), an input with no capacitance and a load resistor to `to`. */
     static NetBuilder loaded(Driver d, double ohms, String to, List<Stimulus.Edge> edges) {
-        return new NetBuilder("ibisload").source("nets/test.yaml", "0").rail("VTT", 1.65).rail("VCC", 3.3).rail("VCCMAX", 3.6)
+        return new NetBuilder("ibisload").source("nets/test.yaml", "0").rail("VTT", 1.65).rail("VCC", 3.3).rail("VCCMAX", 3.6).rail("VCCMIN", 3.0)
                 .driver(d)
                 .receiver(cmos("U2.1", "c_in", 0.0, "vih", 2.0, "vil", 0.8))
                 .segment(segment("TL1", "U1.1", "U2.1", "z0", 50.0, "delay", 1e-12))
@@ -157,11 +157,11 @@ class IbisModelsTests {
 
     @Test
     void risingAndFallingSlewIntoRloadMatchesTheRampKeyword(@TempDir Path dir) throws Exception {
-        for (IbisCorner c : List.of(IbisCorner.TYP, IbisCorner.MAX)) {
+        for (IbisCorner c : IbisCorner.values()) {
             double vcc = IO33.voltageRange().get(c);
             // rising: R_load to GND; falling: R_load to Vcc (see IbisDriverModel)
             for (boolean rising : new boolean[] {true, false}) {
-                String to = rising ? "GND" : c == IbisCorner.TYP ? "VCC" : "VCCMAX";
+                String to = rising ? "GND" : c == IbisCorner.TYP ? "VCC" : c == IbisCorner.MAX ? "VCCMAX" : "VCCMIN";
                 double vFix = rising ? 0 : vcc;
                 Net net = loaded(ibisDriver(c.word()), IO33.ramp().rLoad(), to,
                         List.of(rising ? Stimulus.Edge.RISE : Stimulus.Edge.FALL)).build();
