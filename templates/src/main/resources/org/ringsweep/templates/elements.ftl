@@ -19,6 +19,9 @@ V${e.name} ${e.a} ${e.b} PWL(<#list e.points as p>${p.t} ${p.v}<#sep> </#sep></#
 <#case "timedResistor">
 B${e.name} ${e.a} ${e.b} I = v(${e.a},${e.b})/pwl(time, <#list e.points as p>${p.t}, ${p.v}<#sep>, </#sep></#list>)
 <#break>
+<#case "tableCurrent">
+B${e.name} ${e.a} ${e.b} I = <#if e.scale?has_content>pwl(time, <#list e.scale as p>${p.t}, ${p.v}<#sep>, </#sep></#list>) * </#if>pwl(v(${e.cp},${e.cm}), <#list e.points as p>${p.t}, ${p.v}<#sep>, </#sep></#list>)
+<#break>
 <#case "lossless">
 T${e.name} ${e.a} ${e.aRef} ${e.b} ${e.bRef} Z0=${e.z0} TD=${e.delay}
 <#break>

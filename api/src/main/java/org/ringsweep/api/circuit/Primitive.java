@@ -254,6 +254,131 @@ public sealed interface Primitive {
     }
 
     /**
+     * A current source driven by a table of a controlling voltage and scaled by a function of
+     * time: the current from {@code plus} through the element to {@code minus} is
+     * {@code scale(t) · y(v(ctrlPlus) − v(ctrlMinus))}. Both functions are linear between their
+     * points and held at their end values outside them. With no scale points the scale is 1.
+     *
+     * <p>IBIS-derived buffers use it for their V–I tables: IBIS gives the current positive
+     * <em>into</em> the buffer pin, so a table referenced to ground (pull-down, GND clamp) is
+     * {@code plus} = pad, {@code minus} = ground reference, control (pad, ground reference), and
+     * a Vcc-relative table (pull-up, POWER clamp) is {@code plus} = pad, {@code minus} = supply,
+     * control (supply, pad). The deck writer renders it as a behavioural current source with
+     * flat guard points, because ngspice's {@code pwl()} extrapolates linearly (ngspice.md §4).
+     *
+     * @param name       element name
+     * @param plus       node the current leaves (flows from {@code plus} through the element)
+     * @param minus      node the current enters
+     * @param ctrlPlus   positive controlling node
+     * @param ctrlMinus  negative controlling node
+     * @param x          controlling voltages (V), at least two, strictly increasing
+     * @param y          current at each voltage (A), finite
+     * @param scaleTimes times of the scale function (s), strictly increasing, first ≥ 0; may be empty
+     * @param scale      scale factor at each time (dimensionless), finite
+     */
+    record TableCurrent(String name, String plus, String minus, String ctrlPlus, String ctrlMinus,
+                        double[] x, double[] y, double[] scaleTimes, double[] scale) implements Primitive {
+        /** Validates and copies the arrays. */
+        public TableCurrent {
+            Checks.names(name, plus, minus, ctrlPlus, ctrlMinus);
+            if (x.length < 2 || x.length != y.length) {
+                throw new IllegalArgumentException("table current " + name + " needs at least two points and equal x and y lists");
+            }
+            if (scaleTimes.length != scale.length) {
+                throw new IllegalArgumentException("table current " + name + " needs equal scale time and factor lists");
+            }
+            x = x.clone();
+            y = y.clone();
+            scaleTimes = scaleTimes.clone();
+            scale = scale.clone();
+            for (int i = 0; i < x.length; i++) {
+                Checks.finite(x[i], "table voltage of " + name);
+                Checks.finite(y[i], "table current of " + name);
+                if (i > 0 && !(x[i] > x[i - 1])) {
+                    throw new IllegalArgumentException("table voltages of " + name + " must increase strictly");
+                }
+            }
+            for (int i = 0; i < scaleTimes.length; i++) {
+                Checks.finite(scaleTimes[i], "scale time of " + name);
+                Checks.finite(scale[i], "scale factor of " + name);
+                if (i == 0 ? scaleTimes[0] < 0 : scaleTimes[i] <= scaleTimes[i - 1]) {
+                    throw new IllegalArgumentException("scale times of " + name + " must start at ≥ 0 and increase strictly");
+                }
+            }
+        }
+
+        /** A copy of the controlling voltages. */
+        @Override
+        public double[] x() {
+            return x.clone();
+        }
+
+        /** A copy of the currents. */
+        @Override
+        public double[] y() {
+            return y.clone();
+        }
+
+        /** A copy of the scale times. */
+        @Override
+        public double[] scaleTimes() {
+            return scaleTimes.clone();
+        }
+
+        /** A copy of the scale factors. */
+        @Override
+        public double[] scale() {
+            return scale.clone();
+        }
+
+        /** The table current at controlling voltage {@code v} (A; linear between points, held outside). */
+        public double currentAt(double v) {
+            return held(x, y, v);
+        }
+
+        /** The scale at time {@code t} (1 without scale points; linear between points, held outside). */
+        public double scaleAt(double t) {
+            return scaleTimes.length == 0 ? 1 : held(scaleTimes, scale, t);
+        }
+
+        private static double held(double[] xs, double[] ys, double at) {
+            if (at <= xs[0]) {
+                return ys[0];
+            }
+            for (int i = 1; i < xs.length; i++) {
+                if (at <= xs[i]) {
+                    return ys[i - 1] + (ys[i] - ys[i - 1]) * (at - xs[i - 1]) / (xs[i] - xs[i - 1]);
+                }
+            }
+            return ys[ys.length - 1];
+        }
+
+        @Override
+        public List<String> nodes() {
+            return List.of(plus, minus, ctrlPlus, ctrlMinus);
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof TableCurrent t && t.name.equals(name) && t.plus.equals(plus) && t.minus.equals(minus)
+                    && t.ctrlPlus.equals(ctrlPlus) && t.ctrlMinus.equals(ctrlMinus) && Arrays.equals(t.x, x)
+                    && Arrays.equals(t.y, y) && Arrays.equals(t.scaleTimes, scaleTimes) && Arrays.equals(t.scale, scale);
+        }
+
+        @Override
+        public int hashCode() {
+            return name.hashCode() * 31 + Arrays.hashCode(x) * 17 + Arrays.hashCode(y) * 7 + Arrays.hashCode(scale);
+        }
+
+        @Override
+        public String toString() {
+            return "TableCurrent[" + name + ", " + plus + " -> " + minus + ", ctrl " + ctrlPlus + "," + ctrlMinus
+                    + ", x=" + Arrays.toString(x) + ", y=" + Arrays.toString(y) + ", t=" + Arrays.toString(scaleTimes)
+                    + ", k=" + Arrays.toString(scale) + "]";
+        }
+    }
+
+    /**
      * A lossless transmission line (telegrapher's equations with R = G = 0).
      *
      * @param name  element name

@@ -9,7 +9,7 @@ import org.ringsweep.api.quantity.Dimension;
  *
  * @param key         the key in net files ({@code r_out})
  * @param type        what kind of value it takes
- * @param dimension   the dimension of numbers (ignored for WORD and FLAG)
+ * @param dimension   the dimension of numbers (ignored for WORD, FLAG and TEXT)
  * @param words       the allowed words for WORD (empty otherwise)
  * @param defaultText the default as a user would write it, or empty when there is none
  * @param required    whether it must be given
@@ -29,7 +29,12 @@ public record ParameterSpec(String key, Type type, Dimension dimension, Set<Stri
         /** One of {@link ParameterSpec#words()}. */
         WORD,
         /** true or false. */
-        FLAG
+        FLAG,
+        /**
+         * Free text on one line, such as a file path or a model name inside a file; kept as a
+         * {@link org.ringsweep.api.net.Value.Word}. Added in 0.1 for file-based models.
+         */
+        TEXT
     }
 
     /** Copies the word set. */
@@ -50,6 +55,11 @@ public record ParameterSpec(String key, Type type, Dimension dimension, Set<Stri
     /** A rail-name parameter. */
     public static ParameterSpec rail(String key, String defaultText, boolean required, String description) {
         return new ParameterSpec(key, Type.RAIL, Dimension.VOLTAGE, Set.of(), defaultText, required, description);
+    }
+
+    /** A free-text parameter (a file path, a name inside a file). */
+    public static ParameterSpec text(String key, String defaultText, boolean required, String description) {
+        return new ParameterSpec(key, Type.TEXT, Dimension.DIMENSIONLESS, Set.of(), defaultText, required, description);
     }
 
     /** A word parameter from a fixed set. */

@@ -48,6 +48,11 @@ import org.ringsweep.generators.names.NodeNamer;
  * and a {@code .control} block that runs, writes the probes to the raw file, quits with 3 when the
  * last time point falls short of the stop time (a run that gave up early) and else with 0.
  *
+ * <p>A {@link Primitive.TimedResistor} becomes {@code B… I = v(a,b)/pwl(time, …)} and a
+ * {@link Primitive.TableCurrent} {@code B… I = pwl(time, …) * pwl(v(cp,cm), …)} (the time
+ * factor left out when it has no points); both get flat guard points beyond their ends because
+ * ngspice's {@code pwl()} extrapolates linearly (ngspice.md §4).
+ *
  * <p>A {@link Primitive.SubcircuitText} becomes a {@code .subckt} of its own whose ports are its
  * nodes, plus one {@code X} instance, so its element and internal node names are scoped. Its text
  * may hold element lines only: each non-blank line must start with an element letter and may
@@ -269,6 +274,36 @@ public final class DeckWriter {
             gt[gt.length - 1] = Math.max(t[t.length - 1], stop) + 1;
             gv[gv.length - 1] = ohms[ohms.length - 1];
             e.put("points", points(gt, gv));
+        } else if (p instanceof Primitive.TableCurrent tc) {
+            put(e, "tableCurrent", "a", tc.plus(), "b", tc.minus(), "cp", tc.ctrlPlus(), "cm", tc.ctrlMinus());
+            double[] x = tc.x();
+            double[] y = tc.y();
+            // pwl() extrapolates linearly (ngspice.md §4): flat guard points 1 kV beyond each end hold the table's end values.
+            double span = Math.max(1e3, x[x.length - 1] - x[0]);
+            double[] gx = new double[x.length + 2];
+            double[] gy = new double[x.length + 2];
+            gx[0] = x[0] - span;
+            gy[0] = y[0];
+            System.arraycopy(x, 0, gx, 1, x.length);
+            System.arraycopy(y, 0, gy, 1, y.length);
+            gx[gx.length - 1] = x[x.length - 1] + span;
+            gy[gy.length - 1] = y[y.length - 1];
+            e.put("points", points(gx, gy));
+            double[] t = tc.scaleTimes();
+            double[] k = tc.scale();
+            if (t.length > 0) {
+                double[] gt = new double[t.length + 2];
+                double[] gk = new double[t.length + 2];
+                gt[0] = Math.min(-1, t[0] - 1);
+                gk[0] = k[0];
+                System.arraycopy(t, 0, gt, 1, t.length);
+                System.arraycopy(k, 0, gk, 1, t.length);
+                gt[gt.length - 1] = Math.max(t[t.length - 1], stop) + 1;
+                gk[gk.length - 1] = k[k.length - 1];
+                e.put("scale", points(gt, gk));
+            } else {
+                e.put("scale", List.of());
+            }
         } else if (p instanceof Primitive.LosslessLine t) {
             put(e, "lossless", "a", t.a(), "aRef", t.aRef(), "b", t.b(), "bRef", t.bRef(),
                     "z0", SpiceNumbers.format(t.z0()), "delay", SpiceNumbers.format(t.delay()));

@@ -49,7 +49,7 @@ import org.ringsweep.generators.names.NodeNamer;
  * <li>Every point gets a safe node from {@link NodeNamer}; GND is node {@code 0} and no other
  *     point can become ground. Each rail other than GND is a DC source from its node to ground.</li>
  * <li>Drivers and receivers are elaborated by their model ({@link DriverModel},
- *     {@link ReceiverModel}; built-in {@code ramp} and {@code cmos}).</li>
+ *     {@link ReceiverModel}; built-in {@code ramp}, {@code cmos} and {@code ibis}).</li>
  * <li>Parts become resistors, capacitors and inductors. A 0 Ω resistor (legal in sweeps, e.g. "no
  *     series resistor") becomes 1 µΩ: ngspice has no zero resistance and would otherwise replace
  *     it by 1 mΩ with only a warning (ngspice.md §1, §6). Negative values, and a capacitance or

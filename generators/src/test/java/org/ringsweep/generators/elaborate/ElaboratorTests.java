@@ -178,7 +178,7 @@ class ElaboratorTests {
                 .receiver(cmos("U2.1", "c_in", 1e-12, "vih", 2.0, "vil", 0.8))
                 .segment(segment("TL1", "U1.1", "U2.1", "z0", 50.0, "delay", 1e-9)).build();
         ElaborationException x = assertThrows(ElaborationException.class, () -> elaborator.elaborate(net, "typ"));
-        assertEquals("nets/test.yaml:4:3: U1.1/model: unknown driver model `acme`; expected one of ramp, open-drain", x.getMessage());
+        assertEquals("nets/test.yaml:4:3: U1.1/model: unknown driver model `acme`; expected one of ramp, open-drain, ibis", x.getMessage());
     }
 
     @Test

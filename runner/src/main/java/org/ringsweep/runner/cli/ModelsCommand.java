@@ -63,6 +63,7 @@ public final class ModelsCommand implements Callable<Integer> {
             case RAIL -> "rail";
             case WORD -> String.join("|", new java.util.TreeSet<>(p.words()));
             case FLAG -> "true|false";
+            case TEXT -> "text";
         };
     }
 

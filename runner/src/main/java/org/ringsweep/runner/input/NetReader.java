@@ -31,6 +31,7 @@ import org.ringsweep.api.net.Segment;
 import org.ringsweep.api.net.SimulationSettings;
 import org.ringsweep.api.net.Stimulus;
 import org.ringsweep.api.net.Value;
+import org.ringsweep.api.net.ValuePath;
 import org.ringsweep.api.quantity.Dimension;
 import org.ringsweep.api.quantity.Quantities;
 import org.yaml.snakeyaml.nodes.Node;
@@ -43,6 +44,7 @@ final class NetReader {
     private static final List<String> SEGMENT_KEYS;
     private static final List<String> PART_KEYS = List.of("ref", "kind", "value", "between");
     private static final String POINT = "a point name such as `U1.14` or `J1`";
+    private static final String IBIS_CORNER = "ibis_corner";
     private static final ValueRule.Quantity POSITIVE_TIME = ValueRule.Quantity.of(Dimension.TIME, ValueRule.Bound.POSITIVE);
 
     static {
@@ -226,6 +228,7 @@ final class NetReader {
             case RAIL -> rails.size() > 1 ? rails.stream().skip(1).findFirst().orElseThrow() : "VCC";
             case WORD -> spec.words().stream().sorted().findFirst().orElse("");
             case FLAG -> "true";
+            case TEXT -> "parts/demo.ibs";
         };
     }
 
@@ -431,9 +434,36 @@ final class NetReader {
                 assignments.add(new PointParser.Assignment(path, YamlMap.scalarOrEmpty(file, v, c.path(path), "a single value"),
                         YamlMap.location(file, v)));
             }
-            corners.put(name, parser.parse(net, assignments, key));
+            corners.put(name, ibisColumns(net, name).then(parser.parse(net, assignments, key)));
         }
         return corners;
+    }
+
+    /**
+     * formats.md "Driver and receiver models by file": corners named slow and fast select the
+     * IBIS min and max columns. For every driver and receiver whose model takes
+     * {@code ibis_corner}, the corner sets it unless the corner's own values set it (they are
+     * applied after these).
+     */
+    private Point ibisColumns(Net net, String cornerName) {
+        String column = switch (cornerName) {
+            case "slow" -> "min";
+            case "fast" -> "max";
+            default -> "";
+        };
+        if (column.isEmpty()) {
+            return Point.NONE;
+        }
+        Map<ValuePath, Value> values = new LinkedHashMap<>();
+        List<Element> elements = new ArrayList<>(net.drivers());
+        elements.addAll(net.receivers());
+        for (Element e : elements) {
+            boolean takesColumn = ElementRules.model(catalog, e).flatMap(m -> m.parameter(IBIS_CORNER)).isPresent();
+            if (takesColumn) {
+                values.put(new ValuePath(e.id(), IBIS_CORNER), new Value.Word(column));
+            }
+        }
+        return Point.of(values);
     }
 
     private Value read(YamlMap m, String key, ValueRule rule) {

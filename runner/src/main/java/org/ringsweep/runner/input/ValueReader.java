@@ -49,6 +49,12 @@ final class ValueReader {
                 return new Value.Flag(t.equals("true"));
             }
             throw new InputException(location, key, "expected `true` or `false`, found " + found(t));
+        } else if (rule instanceof ValueRule.Text) {
+            if (!t.isEmpty() && t.chars().noneMatch(ch -> ch < 0x20 || ch == 0x7f)) {
+                return new Value.Word(t);
+            }
+            throw new InputException(location, key, "expected text on one line such as `parts/demo.ibs`, found "
+                    + (t.isEmpty() ? "nothing" : "text with control characters"));
         } else if (rule instanceof ValueRule.Count c) {
             if (t.matches("\\+?\\d{1,9}") && Integer.parseInt(t.replace("+", "")) >= c.min()) {
                 return Value.of(Integer.parseInt(t.replace("+", "")), Dimension.DIMENSIONLESS);

@@ -74,6 +74,10 @@ sealed interface ValueRule {
     record Flag() implements ValueRule {
     }
 
+    /** Free text on one line (a file path, a name inside a file): not empty, no control characters. */
+    record Text() implements ValueRule {
+    }
+
     /**
      * A whole number.
      *
@@ -105,6 +109,7 @@ sealed interface ValueRule {
             case RAIL -> new Rail();
             case WORD -> new Word(spec.words());
             case FLAG -> new Flag();
+            case TEXT -> new Text();
         };
     }
 
