@@ -52,7 +52,8 @@ public final class DemoCommand implements Callable<Integer> {
         CheckFlow.Outcome outcome = new CheckFlow(common, spec.commandLine().getOut(), err).execute(nets, true, List.of(), true);
         var out = spec.commandLine().getOut();
         out.println();
-        out.println("Demo results are under " + common.out.toAbsolutePath().normalize() + " (results.jsonl, one folder of decks per net).");
+        out.println("Demo results are under " + common.out.toAbsolutePath().normalize()
+                + " (report.html to open in a browser, junit.xml, results.jsonl, one folder of decks per net).");
         // The demo is laid out so that exactly SYNC_OUT_REVA fails; anything else is worth a non-zero exit.
         boolean onlyIntendedFailures = !outcome.records().isEmpty() && outcome.records().stream()
                 .allMatch(r -> r.verdict() == Verdict.PASS || (r.verdict() == Verdict.FAIL && r.net().equals(INTENDED_FAILURE)));
