@@ -19,11 +19,11 @@ import org.ringsweep.api.circuit.SafeName;
  */
 final class Netlist {
     /** A lossy line is cut into sections each losing at most this much (neper) of a travelling wave. */
-    static final double LOSS_PER_SECTION = 0.005;
+    static final double LOSS_PER_SECTION = 0.001;
     /** Fewest sections of a lossy line: the lumped loss is spread along it, not put at its ends. */
-    static final int MIN_SECTIONS = 4;
+    static final int MIN_SECTIONS = 8;
     /** Most sections of a lossy line (a very lossy line gets more loss per section). */
-    static final int MAX_SECTIONS = 64;
+    static final int MAX_SECTIONS = 200;
 
     /** Resistors, including diode series resistances and the lumped loss of lossy lines. */
     final List<int[]> resistorNodes = new ArrayList<>();
