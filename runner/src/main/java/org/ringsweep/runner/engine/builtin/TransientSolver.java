@@ -36,7 +36,10 @@ import org.ringsweep.runner.engine.FailureKind;
  * <li>Diodes: Newton–Raphson with SPICE's {@code pnjlim} limiting. The factored matrix is reused
  *     while each diode's conductance stays within {@value #CHORD_RELATIVE} (relative) plus
  *     {@value #CHORD_ABSOLUTE} S of the factored one (a chord iteration; its right-hand side
- *     uses the true junction current, so its fixed point is the exact solution). Without diodes
+ *     uses the true junction current, so its fixed point is the exact solution). A point is
+ *     accepted when no voltage was limited, the solution moved within {@code reltol}/{@code vntol}
+ *     of the previous iterate (not asked of the first) and every linearised diode current matches
+ *     the Shockley current at the new voltages (SPICE's current test). Without diodes
  *     one solve per step; the factorisation is reused until the step, the integration rule or a
  *     timed resistor's value changes.</li>
  * </ul>
@@ -383,7 +386,7 @@ final class TransientSolver {
             stampHistory(b, rule, h);
             stampDiodeCurrents(b);
             lu.solve(b);
-            boolean converged = !limited && (dio.length == 0 || iter > 0) && close(b, x, size);
+            boolean converged = !limited && (iter > 0 ? close(b, x, size) : true) && linearisationHolds(b);
             double[] previous = x;
             x = b;
             b = previous;
@@ -530,6 +533,23 @@ final class TransientSolver {
         for (int d = 0; d < dio.length; d++) {
             inject(b, dio[d][1], dio[d][0], dioIeq[d]);
         }
+    }
+
+    /**
+     * SPICE's current test: at the new solution's junction voltages, the linearised diode
+     * currents equal the true ones within the tolerances. With it a step whose diodes stay in a
+     * linear region (reverse-biased clamps) needs one solve, not two.
+     */
+    private boolean linearisationHolds(double[] sol) {
+        for (int d = 0; d < dio.length; d++) {
+            double vd = v(sol, dio[d][0]) - v(sol, dio[d][1]);
+            double linear = dioG[d] * vd + dioIeq[d];
+            double exact = Junction.current(dioM[d], vd);
+            if (!(Math.abs(exact - linear) <= RELTOL * Math.max(Math.abs(exact), Math.abs(linear)) + ABSTOL)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Whether two solutions agree within the Newton tolerances. */

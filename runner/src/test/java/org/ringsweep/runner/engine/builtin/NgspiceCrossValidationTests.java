@@ -16,6 +16,7 @@ import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
 import net.jqwik.api.ShrinkingMode;
 import net.jqwik.api.Tuple;
+import net.jqwik.api.lifecycle.AfterContainer;
 import net.jqwik.api.statistics.Statistics;
 import org.ringsweep.api.wave.Waveforms;
 import org.ringsweep.generators.deck.DeckOptions;
@@ -156,7 +157,22 @@ class NgspiceCrossValidationTests {
         }
     }
 
+    /** Largest differences seen in this run, for the report printed after the property: v_max/v_min (fraction of swing), crossing (s, and fraction of its tolerance). */
+    private static final double[] WORST = new double[3];
+
+    @AfterContainer
+    static void reportWorstDifferences() {
+        System.out.printf(java.util.Locale.ROOT, "built-in vs ngspice, worst differences: extremes %.3f %% of the swing,"
+                + " first crossing %.1f ps (%.0f %% of its tolerance)%n", WORST[0] * 100, WORST[1] * 1e12, WORST[2] * 100);
+    }
+
     private static void check(List<String> problems, String what, double ref, double mine, double tol) {
+        if (what.endsWith("first crossing")) {
+            WORST[1] = Math.max(WORST[1], Math.abs(ref - mine));
+            WORST[2] = Math.max(WORST[2], Math.abs(ref - mine) / tol);
+        } else {
+            WORST[0] = Math.max(WORST[0], Math.abs(ref - mine) / (tol / 0.01));
+        }
         if (!(Math.abs(ref - mine) <= tol)) {
             problems.add(what + ": ngspice " + ref + ", builtin " + mine + " (tolerance " + tol + ")");
         }
