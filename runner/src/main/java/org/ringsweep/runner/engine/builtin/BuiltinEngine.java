@@ -69,7 +69,9 @@ public final class BuiltinEngine implements SimulationEngine, CircuitEngine {
         Objects.requireNonNull(circuit, "circuit");
         Objects.requireNonNull(timeout, "timeout");
         long start = System.nanoTime();
-        long deadline = start + Math.max(0, Math.min(timeout.toNanos(), Long.MAX_VALUE / 4));
+        // Durations beyond a year would overflow nanoseconds: treat them as no limit.
+        long limit = timeout.compareTo(Duration.ofDays(365)) > 0 ? Long.MAX_VALUE / 4 : Math.max(0, timeout.toNanos());
+        long deadline = start + limit;
         try {
             Netlist net = new Netlist(circuit);
             TransientSolver solver = new TransientSolver(circuit, net, deadline);
@@ -81,6 +83,9 @@ public final class BuiltinEngine implements SimulationEngine, CircuitEngine {
             return new SimulationOutcome.Failure(FailureKind.UNSUPPORTED, e.getMessage(), "", elapsed(start));
         } catch (SolveException e) {
             return new SimulationOutcome.Failure(e.kind(), e.getMessage(), "", elapsed(start));
+        } catch (RuntimeException e) {
+            // A defect of this engine, not of the circuit: report it as a crash rather than throw.
+            return new SimulationOutcome.Failure(FailureKind.CRASH, "the built-in engine failed: " + e, "", elapsed(start));
         }
     }
 

@@ -247,7 +247,14 @@ final class TransientSolver {
         Map<String, double[]> signals = new LinkedHashMap<>();
         double[] axis = Arrays.copyOf(times, count);
         for (int i = 0; i < names.length; i++) {
-            signals.put(names[i], Arrays.copyOf(out[i], count));
+            double[] values = Arrays.copyOf(out[i], count);
+            for (int k = 0; k < count; k++) {
+                if (!Double.isFinite(values[k])) {
+                    throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's solution at node `" + names[i]
+                            + "` is not finite at t = `" + axis[k] + "` s");
+                }
+            }
+            signals.put(names[i], values);
         }
         return Waveforms.of(axis, signals, false);
     }
