@@ -27,5 +27,10 @@ public enum FailureKind {
     /** No engine could be found or started. */
     ENGINE_NOT_FOUND,
     /** Writing the deck or reading the results failed on the file system. */
-    IO
+    IO,
+    /**
+     * The engine cannot simulate an element of the circuit (e.g. sub-circuit text in the built-in
+     * engine) or the form of the job; the message names the element.
+     */
+    UNSUPPORTED
 }

@@ -1,0 +1,169 @@
+package org.ringsweep.runner.bench;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.stream.Stream;
+import org.ringsweep.api.circuit.Circuit;
+import org.ringsweep.api.net.Net;
+import org.ringsweep.api.net.Point;
+import org.ringsweep.api.net.Value;
+import org.ringsweep.api.net.ValuePath;
+import org.ringsweep.api.quantity.Dimension;
+import org.ringsweep.generators.deck.DeckOptions;
+import org.ringsweep.generators.deck.DeckWriter;
+import org.ringsweep.generators.elaborate.Elaborator;
+import org.ringsweep.generators.models.BuiltinModels;
+import org.ringsweep.runner.engine.NgspiceEngine;
+import org.ringsweep.runner.engine.SimulationJob;
+import org.ringsweep.runner.engine.SimulationOutcome;
+import org.ringsweep.runner.engine.builtin.BuiltinEngine;
+import org.ringsweep.runner.input.NetFileLoader;
+
+/**
+ * Per-point time of the built-in engine against ngspice on the demo board's nets, and a
+ * sweep-like loop of {@value #SWEEP_POINTS} points on one net with the built-in engine. Goal: the
+ * built-in engine at least 100 × faster per point.
+ *
+ * <p>ngspice's time per point covers what a point costs with it: writing the deck, the process,
+ * reading the raw file ({@link NgspiceEngine#run}). The built-in engine's covers
+ * {@link BuiltinEngine#solve}; the sweep loop adds applying the point and elaborating the net,
+ * as a sweep does. Both take the median of several runs after a warm-up, on one thread.
+ */
+public final class EngineBenchmark {
+    /** Points of the sweep-like loop. */
+    public static final int SWEEP_POINTS = 10_000;
+    private static final int NGSPICE_RUNS = 3;
+    private static final int BUILTIN_RUNS = 21;
+    private static final int BUILTIN_WARM_UP = 100;
+    private static final String SWEEP_NET = "sync-terminated.yaml";
+    private static final String SWEEP_PART = "R20";
+
+    private EngineBenchmark() {
+    }
+
+    /**
+     * Runs the benchmark on the demo board nets found at {@code examples/demo-board/nets} below
+     * the current folder or its parent.
+     *
+     * @param workDir a scratch folder for decks and raw files
+     * @param ngspice the ngspice binary
+     * @return the report: one line per net and the sweep loop's figures
+     * @throws IllegalStateException when the demo nets cannot be found
+     */
+    public static String run(Path workDir, Path ngspice) {
+        Path cwd = Path.of("").toAbsolutePath();
+        for (Path base : new Path[] {cwd, cwd.getParent()}) {
+            if (base != null && Files.isDirectory(base.resolve("examples/demo-board/nets"))) {
+                return run(workDir, ngspice, base.resolve("examples/demo-board/nets"));
+            }
+        }
+        throw new IllegalStateException("demo board nets not found at `examples/demo-board/nets` below `" + cwd
+                + "` or its parent; run from the project folder or pass the folder");
+    }
+
+    /**
+     * Runs the benchmark on the nets of a folder.
+     *
+     * @param workDir a scratch folder for decks and raw files
+     * @param ngspice the ngspice binary
+     * @param netsDir the folder of {@code *.yaml} net files (the sweep loop uses {@value #SWEEP_NET} when present)
+     * @return the report
+     */
+    public static String run(Path workDir, Path ngspice, Path netsDir) {
+        try {
+            Files.createDirectories(workDir);
+            NetFileLoader loader = new NetFileLoader(new BuiltinModels());
+            Elaborator elaborator = new Elaborator();
+            NgspiceEngine ng = NgspiceEngine.at(ngspice);
+            BuiltinEngine builtin = new BuiltinEngine();
+            List<Path> nets;
+            try (Stream<Path> s = Files.list(netsDir)) {
+                nets = s.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
+            }
+            StringBuilder out = new StringBuilder("engine benchmark (per point, median; ngspice = deck write + process + raw read)\n");
+            double sumNg = 0;
+            double sumBuiltin = 0;
+            int index = 0;
+            for (Path file : nets) {
+                Circuit c = elaborator.elaborate(loader.load(file), "typ").circuit();
+                for (int i = 0; i < BUILTIN_WARM_UP; i++) {
+                    builtin.solve(c, Duration.ofMinutes(1)); // JIT warm-up, as the many points of a sweep give
+                }
+                double tb = medianSeconds(BUILTIN_RUNS, () -> require(builtin.solve(c, Duration.ofMinutes(1)), file));
+                Path dir = workDir.resolve("net" + index++);
+                double tn = medianSeconds(NGSPICE_RUNS, () -> require(ng.run(job(c, dir)), file));
+                sumNg += tn;
+                sumBuiltin += tb;
+                out.append(String.format(Locale.ROOT, "  %-24s ngspice %8.2f ms  builtin %7.3f ms  ratio %6.0f x%n",
+                        file.getFileName(), tn * 1e3, tb * 1e3, tn / tb));
+            }
+            out.append(String.format(Locale.ROOT, "  all %d nets: ngspice %.2f ms, builtin %.3f ms per point: %.0f x faster (goal >= 100 x)%n",
+                    nets.size(), sumNg / nets.size() * 1e3, sumBuiltin / nets.size() * 1e3, sumNg / sumBuiltin));
+            Path sweepNet = netsDir.resolve(SWEEP_NET);
+            if (Files.isRegularFile(sweepNet)) {
+                out.append(sweep(loader.load(sweepNet), elaborator, builtin));
+            }
+            return out.toString();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** The sweep-like loop: the series resistor from 10 to 100 Ω in {@value #SWEEP_POINTS} steps, each point elaborated and solved. */
+    private static String sweep(Net net, Elaborator elaborator, BuiltinEngine builtin) {
+        for (int i = 0; i < 200; i++) {
+            builtin.solve(elaborator.elaborate(at(net, 10 + i), "warm").circuit(), Duration.ofMinutes(1)); // JIT warm-up
+        }
+        long t0 = System.nanoTime();
+        double solveNanos = 0;
+        for (int i = 0; i < SWEEP_POINTS; i++) {
+            double ohms = 10 + 90.0 * i / (SWEEP_POINTS - 1);
+            Circuit c = elaborator.elaborate(at(net, ohms), "p" + i).circuit();
+            long s0 = System.nanoTime();
+            SimulationOutcome o = builtin.solve(c, Duration.ofMinutes(1));
+            solveNanos += System.nanoTime() - s0;
+            if (!o.succeeded()) {
+                throw new IllegalStateException("built-in engine failed at " + SWEEP_PART + " = " + ohms + " ohm: " + o);
+            }
+        }
+        double total = (System.nanoTime() - t0) / 1e9;
+        return String.format(Locale.ROOT, "  sweep loop, %s/%s 10..100 ohm, %d points: %.2f s, %.3f ms per point"
+                        + " (%.3f ms of it solving, the rest applying the point and elaborating)%n",
+                SWEEP_PART, "value", SWEEP_POINTS, total, total / SWEEP_POINTS * 1e3, solveNanos / SWEEP_POINTS / 1e6);
+    }
+
+    private static Net at(Net net, double ohms) {
+        return net.with(Point.of(Map.of(new ValuePath(SWEEP_PART, "value"), new Value.Number(ohms, Dimension.RESISTANCE))));
+    }
+
+    private static SimulationJob job(Circuit c, Path dir) {
+        String deck = new DeckWriter().render(c, DeckOptions.of("bench.raw"));
+        return new SimulationJob(deck, dir, "bench.cir", "bench.raw", c.analysis().stop(), Duration.ofMinutes(2), c.probes());
+    }
+
+    private static void require(SimulationOutcome o, Path file) {
+        if (o instanceof SimulationOutcome.Failure f) {
+            throw new IllegalStateException(file.getFileName() + ": " + f.kind() + " " + f.message());
+        }
+    }
+
+    /** Runs once to warm up, then {@code runs} times; the median wall-clock time (s). */
+    private static double medianSeconds(int runs, Runnable r) {
+        r.run();
+        double[] t = new double[runs];
+        for (int i = 0; i < runs; i++) {
+            long t0 = System.nanoTime();
+            r.run();
+            t[i] = (System.nanoTime() - t0) / 1e9;
+        }
+        Arrays.sort(t);
+        return t[runs / 2];
+    }
+}

@@ -1,0 +1,108 @@
+package org.ringsweep.runner.engine.builtin;
+
+/**
+ * Dense LU factorisation with partial (row) pivoting, in place, for the small systems of a board
+ * net (tens of unknowns). One instance holds one factorisation and its scratch space; it is
+ * reused for many right-hand sides while the matrix stays the same. Not thread-safe: each solve
+ * owns its instances.
+ */
+final class DenseLu {
+    /** A pivot below this (relative to the largest entry of the matrix) means a singular matrix. */
+    private static final double SINGULAR_PIVOT = 1e-14;
+
+    private final int n;
+    private final double[] lu;
+    private final int[] perm;
+    private final double[] scratch;
+
+    DenseLu(int n) {
+        this.n = n;
+        this.lu = new double[n * n];
+        this.perm = new int[n];
+        this.scratch = new double[n];
+    }
+
+    /**
+     * Factors {@code a} (row-major, n × n; left unchanged).
+     *
+     * @return the index of the first unknown found without a usable pivot, or −1 when the matrix is regular
+     */
+    int factor(double[] a) {
+        System.arraycopy(a, 0, lu, 0, n * n);
+        double scale = 0;
+        for (double v : a) {
+            scale = Math.max(scale, Math.abs(v));
+        }
+        double tiny = SINGULAR_PIVOT * Math.max(scale, Double.MIN_NORMAL);
+        for (int i = 0; i < n; i++) {
+            perm[i] = i;
+        }
+        for (int k = 0; k < n; k++) {
+            int p = k;
+            double best = Math.abs(lu[k * n + k]);
+            for (int i = k + 1; i < n; i++) {
+                double v = Math.abs(lu[i * n + k]);
+                if (v > best) {
+                    best = v;
+                    p = i;
+                }
+            }
+            if (best <= tiny) {
+                return perm[k];
+            }
+            if (p != k) {
+                swapRows(p, k);
+            }
+            double pivot = lu[k * n + k];
+            for (int i = k + 1; i < n; i++) {
+                int row = i * n;
+                double f = lu[row + k];
+                if (f == 0) {
+                    continue;
+                }
+                f /= pivot;
+                lu[row + k] = f;
+                int krow = k * n;
+                for (int j = k + 1; j < n; j++) {
+                    lu[row + j] -= f * lu[krow + j];
+                }
+            }
+        }
+        return -1;
+    }
+
+    /** Solves A·x = b with the last factorisation; {@code b} is overwritten with x. */
+    void solve(double[] b) {
+        for (int i = 0; i < n; i++) {
+            scratch[i] = b[perm[i]];
+        }
+        for (int i = 0; i < n; i++) {
+            double s = scratch[i];
+            int row = i * n;
+            for (int j = 0; j < i; j++) {
+                s -= lu[row + j] * scratch[j];
+            }
+            scratch[i] = s;
+        }
+        for (int i = n - 1; i >= 0; i--) {
+            double s = scratch[i];
+            int row = i * n;
+            for (int j = i + 1; j < n; j++) {
+                s -= lu[row + j] * scratch[j];
+            }
+            scratch[i] = s / lu[row + i];
+        }
+        System.arraycopy(scratch, 0, b, 0, n);
+    }
+
+    private void swapRows(int p, int k) {
+        for (int j = 0; j < n; j++) {
+            double t = lu[p * n + j];
+            lu[p * n + j] = lu[k * n + j];
+            lu[k * n + j] = t;
+        }
+        int t = perm[p];
+        perm[p] = perm[k];
+        perm[k] = t;
+    }
+}

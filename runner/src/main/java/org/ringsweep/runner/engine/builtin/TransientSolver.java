@@ -1,0 +1,617 @@
+package org.ringsweep.runner.engine.builtin;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.ringsweep.api.circuit.Circuit;
+import org.ringsweep.api.circuit.DiodeModel;
+import org.ringsweep.api.circuit.Primitive;
+import org.ringsweep.api.circuit.Transient;
+import org.ringsweep.api.wave.Waveforms;
+import org.ringsweep.runner.engine.FailureKind;
+
+/**
+ * One transient solve of a {@link Netlist}: the DC operating point, then fixed-step
+ * trapezoidal integration with backward-Euler steps at the start and after every source
+ * breakpoint. Used once, by one thread.
+ *
+ * <h2>Method</h2>
+ * <ul>
+ * <li>Modified nodal analysis; companion models: a capacitor is a conductance {@code 2C/h}
+ *     (trapezoidal) or {@code C/h} (backward Euler) beside a history current; an inductor keeps its
+ *     branch current as an unknown with {@code v − (2L/h)·i = −v_n − (2L/h)·i_n} (or
+ *     {@code v − (L/h)·i = −(L/h)·i_n}).</li>
+ * <li>A lossless line is two Norton equivalents (method of characteristics, Bergeron):
+ *     {@code i1(t) = v1(t)/Z0 − [v2(t−TD)/Z0 + i2(t−TD)]} and the same with the ports swapped,
+ *     the delayed values interpolated linearly in the stored history: the delay is exact, not
+ *     rounded to the step. At DC a line is a direct connection of its ports.</li>
+ * <li>Time step {@code h = min(maxStep, shortest delay / 2)}, so every delayed value lies at
+ *     least one step in the past; breakpoints (PWL corners, timed-resistor corners, the stop
+ *     time) are hit exactly, a step that would end within 1 % of a step before one is stretched
+ *     to it.</li>
+ * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each breakpoint damp the
+ *     trapezoidal rule's numerical ringing at a corner of a source.</li>
+ * <li>Diodes: Newton–Raphson with SPICE's {@code pnjlim} limiting. The factored matrix is reused
+ *     while each diode's conductance stays within {@value #CHORD_RELATIVE} (relative) plus
+ *     {@value #CHORD_ABSOLUTE} S of the factored one (a chord iteration; its right-hand side
+ *     uses the true junction current, so its fixed point is the exact solution). A point is
+ *     accepted when no voltage was limited, the solution moved within {@code reltol}/{@code vntol}
+ *     of the previous iterate (not asked of the first) and every linearised diode current matches
+ *     the Shockley current at the new voltages (SPICE's current test). Without diodes
+ *     one solve per step; the factorisation is reused until the step, the integration rule or a
+ *     timed resistor's value changes.</li>
+ * </ul>
+ */
+final class TransientSolver {
+    /** Backward-Euler steps after t = 0 and after every breakpoint. */
+    static final int DAMPED_STEPS = 2;
+    /** Newton iterations per time point before the solve gives up. */
+    static final int MAX_NEWTON = 150;
+    /** Relative tolerance of Newton convergence (SPICE {@code reltol}). */
+    static final double RELTOL = 1e-3;
+    /** Absolute voltage tolerance of Newton convergence (V; SPICE {@code vntol}). */
+    static final double VNTOL = 1e-6;
+    /** Absolute current tolerance of Newton convergence (A; SPICE {@code abstol}). */
+    static final double ABSTOL = 1e-12;
+    /** Conductance from every node to ground (S), so a node reached only through capacitors has a DC solution. */
+    static final double NODE_GMIN = 1e-12;
+    /** Relative change of a diode's conductance that makes the solver re-factor. */
+    static final double CHORD_RELATIVE = 0.05;
+    /** Absolute change of a diode's conductance that makes the solver re-factor (S). */
+    static final double CHORD_ABSOLUTE = 1e-6;
+    /** How many steps between two looks at the wall clock. */
+    private static final int CLOCK_EVERY = 64;
+
+    private enum Rule { DC, EULER, TRAPEZOID }
+
+    private final Netlist net;
+    private final Transient analysis;
+    private final long deadlineNanos;
+    private final Map<String, String> probes;
+
+    private final int nodes;
+    private final int size;
+    private final int dcSize;
+    private final int[][] res;
+    private final double[] resG;
+    private final int[][] cap;
+    private final double[] capC;
+    private final int[][] ind;
+    private final double[] indL;
+    private final int[][] src;
+    private final Primitive[] srcEl;
+    private final int[][] tres;
+    private final Primitive.TimedResistor[] tresEl;
+    private final int[][] line;
+    private final double[] lineG;
+    private final double[] lineTd;
+    private final int[][] dio;
+    private final DiodeModel[] dioM;
+    private final double[] dioNvt;
+    private final double[] dioCrit;
+
+    // State of the last accepted point.
+    private double[] x;
+    private final double[] capV;
+    private final double[] capI;
+    private final double[] indV;
+    private final double[] indJ;
+    private final LineHistory[] history;
+    private final double[] dioV;
+
+    // Per-iteration scratch.
+    private final double[] dioIter;
+    private final double[] dioG;
+    private final double[] dioIeq;
+    private final double[] lineIh;
+    private final double[] trG;
+
+    // Factorisation cache for the transient system.
+    private final double[] matrix;
+    private final DenseLu lu;
+    private boolean factored;
+    private Rule factoredRule;
+    private double factoredH;
+    private final double[] factoredTrG;
+    private int factorCount;
+
+    TransientSolver(Circuit circuit, Netlist net, long deadlineNanos) {
+        this.net = net;
+        this.analysis = circuit.analysis();
+        this.deadlineNanos = deadlineNanos;
+        this.probes = circuit.probes();
+        nodes = net.nodeCount();
+        size = net.size();
+        dcSize = size + net.lineNodes.size();
+        res = net.resistorNodes.toArray(new int[0][]);
+        resG = unbox(net.resistorSiemens);
+        cap = net.capacitorNodes.toArray(new int[0][]);
+        capC = unbox(net.capacitorFarads);
+        ind = net.inductors.toArray(new int[0][]);
+        indL = unbox(net.inductorHenries);
+        src = net.sources.toArray(new int[0][]);
+        srcEl = net.sourceElements.toArray(new Primitive[0]);
+        tres = net.timedResistorNodes.toArray(new int[0][]);
+        tresEl = net.timedResistors.toArray(new Primitive.TimedResistor[0]);
+        line = net.lineNodes.toArray(new int[0][]);
+        lineG = unbox(net.lineZ0);
+        for (int i = 0; i < lineG.length; i++) {
+            lineG[i] = 1 / lineG[i];
+        }
+        lineTd = unbox(net.lineDelay);
+        dio = net.diodeNodes.toArray(new int[0][]);
+        dioM = net.diodeModels.toArray(new DiodeModel[0]);
+        dioNvt = new double[dioM.length];
+        dioCrit = new double[dioM.length];
+        for (int d = 0; d < dioM.length; d++) {
+            dioNvt[d] = Junction.nvt(dioM[d]);
+            dioCrit[d] = Junction.criticalVoltage(dioM[d]);
+        }
+        capV = new double[cap.length];
+        capI = new double[cap.length];
+        indV = new double[ind.length];
+        indJ = new double[ind.length];
+        history = new LineHistory[line.length];
+        dioV = new double[dio.length];
+        dioIter = new double[dio.length];
+        dioG = new double[dio.length];
+        dioIeq = new double[dio.length];
+        lineIh = new double[2 * line.length];
+        trG = new double[tres.length];
+        factoredTrG = new double[tres.length];
+        matrix = new double[size * size];
+        lu = new DenseLu(size);
+    }
+
+    /** The time step the solve uses (s). */
+    double step() {
+        return Math.min(analysis.maxStep(), net.shortestDelay() / 2);
+    }
+
+    /** How many times the transient matrix was factored (for the benchmark's notes). */
+    int factorCount() {
+        return factorCount;
+    }
+
+    /**
+     * Runs the analysis.
+     *
+     * @return the probes' waveforms on every accepted time point
+     * @throws SolveException for a singular matrix, a Newton failure or the timeout
+     */
+    Waveforms solve() {
+        operatingPoint();
+        double h = step();
+        double stop = analysis.stop();
+        double[] breaks = breakpoints(stop, h);
+        String[] names = probes.keySet().toArray(new String[0]);
+        int[] probeIndex = new int[names.length];
+        for (int i = 0; i < names.length; i++) {
+            probeIndex[i] = net.indexOf(names[i]);
+        }
+        int capacity = (int) Math.min(50_000_000L, (long) Math.ceil(stop / h) + breaks.length + 2);
+        double[] times = new double[capacity];
+        double[][] out = new double[names.length][capacity];
+        int count = 0;
+        times[count] = 0;
+        record(out, probeIndex, count++);
+
+        double t = 0;
+        int damped = DAMPED_STEPS;
+        int next = 0;
+        double tiny = 1e-6 * h;
+        double[] delayed = new double[4];
+        while (t < stop - tiny) {
+            while (breaks[next] <= t + tiny) {
+                next++;
+            }
+            double bp = breaks[next];
+            double tn = t + h;
+            boolean corner = false;
+            if (tn >= bp - 0.01 * h) {
+                tn = bp;
+                corner = true;
+            }
+            double dt = tn - t;
+            Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
+            for (int l = 0; l < line.length; l++) {
+                history[l].at(tn - lineTd[l], delayed);
+                lineIh[2 * l] = lineG[l] * delayed[2] + delayed[3];
+                lineIh[2 * l + 1] = lineG[l] * delayed[0] + delayed[1];
+            }
+            for (int k = 0; k < tres.length; k++) {
+                trG[k] = 1 / tresEl[k].ohmsAt(tn);
+            }
+            if (!newton(rule, dt, tn, 1.0)) {
+                throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
+                        + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
+            }
+            accept(rule, dt, tn);
+            if (count == times.length) {
+                times = Arrays.copyOf(times, count * 2);
+                for (int i = 0; i < out.length; i++) {
+                    out[i] = Arrays.copyOf(out[i], count * 2);
+                }
+            }
+            times[count] = tn;
+            record(out, probeIndex, count++);
+            t = tn;
+            damped = corner ? DAMPED_STEPS : Math.max(0, damped - 1);
+            if (count % CLOCK_EVERY == 0 && System.nanoTime() > deadlineNanos) {
+                throw new SolveException(FailureKind.TIMEOUT, "the built-in engine ran out of time at simulated t = `"
+                        + t + "` s of `" + stop + "` s");
+            }
+        }
+        Map<String, double[]> signals = new LinkedHashMap<>();
+        double[] axis = Arrays.copyOf(times, count);
+        for (int i = 0; i < names.length; i++) {
+            double[] values = Arrays.copyOf(out[i], count);
+            for (int k = 0; k < count; k++) {
+                if (!Double.isFinite(values[k])) {
+                    throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's solution at node `" + names[i]
+                            + "` is not finite at t = `" + axis[k] + "` s");
+                }
+            }
+            signals.put(names[i], values);
+        }
+        return Waveforms.of(axis, signals, false);
+    }
+
+    private void record(double[][] out, int[] probeIndex, int at) {
+        for (int i = 0; i < probeIndex.length; i++) {
+            out[i][at] = probeIndex[i] < 0 ? 0 : x[probeIndex[i]];
+        }
+    }
+
+    /** PWL and timed-resistor corners inside (0, stop), and the stop time; sorted, near-duplicates merged. */
+    private double[] breakpoints(double stop, double h) {
+        List<Double> all = new ArrayList<>();
+        for (Primitive p : srcEl) {
+            if (p instanceof Primitive.PwlVoltage v) {
+                for (double t : v.times()) {
+                    all.add(t);
+                }
+            }
+        }
+        for (Primitive.TimedResistor r : tresEl) {
+            for (double t : r.times()) {
+                all.add(t);
+            }
+        }
+        double merge = 1e-6 * h;
+        double[] sorted = all.stream().mapToDouble(Double::doubleValue).filter(t -> t > merge && t < stop - merge)
+                .sorted().toArray();
+        double[] out = new double[sorted.length + 1];
+        int n = 0;
+        for (double t : sorted) {
+            if (n == 0 || t - out[n - 1] > merge) {
+                out[n++] = t;
+            }
+        }
+        out[n++] = stop;
+        return Arrays.copyOf(out, n);
+    }
+
+    // ---------------------------------------------------------------- DC operating point
+
+    /** Solves the DC point at t = 0 (sources at their t = 0 values, capacitors open, inductors and lines short). */
+    private void operatingPoint() {
+        for (int k = 0; k < tres.length; k++) {
+            trG[k] = 1 / tresEl[k].ohmsAt(0);
+        }
+        double[] a = new double[dcSize * dcSize];
+        double[] b = new double[dcSize];
+        DenseLu dcLu = new DenseLu(dcSize);
+        double[] sol = new double[dcSize];
+        Arrays.fill(dioIter, 0);
+        boolean ok = dcNewton(a, b, dcLu, sol, 1.0);
+        if (!ok) {
+            // Source stepping: ramp the sources up from zero, each solution starting the next.
+            Arrays.fill(sol, 0);
+            Arrays.fill(dioIter, 0);
+            ok = true;
+            for (int s = 1; s <= 20 && ok; s++) {
+                ok = dcNewton(a, b, dcLu, sol, s / 20.0);
+            }
+            if (!ok) {
+                throw new SolveException(FailureKind.CONVERGENCE,
+                        "the built-in engine found no DC operating point (Newton and source stepping failed)");
+            }
+        }
+        x = Arrays.copyOf(sol, size);
+        for (int c = 0; c < cap.length; c++) {
+            capV[c] = v(x, cap[c][0]) - v(x, cap[c][1]);
+            capI[c] = 0;
+        }
+        for (int k = 0; k < ind.length; k++) {
+            indJ[k] = x[ind[k][2]];
+            indV[k] = 0;
+        }
+        for (int l = 0; l < line.length; l++) {
+            int[] n = line[l];
+            double j = sol[size + l];
+            history[l] = new LineHistory();
+            history[l].add(0, v(x, n[0]) - v(x, n[1]), j, v(x, n[2]) - v(x, n[3]), -j);
+        }
+        System.arraycopy(dioIter, 0, dioV, 0, dio.length);
+        for (int d = 0; d < dio.length; d++) {
+            dioG[d] = Junction.conductance(dioM[d], dioV[d]);
+        }
+    }
+
+    private boolean dcNewton(double[] a, double[] b, DenseLu dcLu, double[] sol, double scale) {
+        for (int iter = 0; iter < MAX_NEWTON; iter++) {
+            boolean limited = linearise(sol, iter, false);
+            Arrays.fill(a, 0);
+            stampLinear(a, dcSize, Rule.DC, 0);
+            for (int d = 0; d < dio.length; d++) {
+                conductance(a, dcSize, dio[d][0], dio[d][1], dioG[d]);
+            }
+            int bad = dcLu.factor(a);
+            if (bad >= 0) {
+                throw singular(bad, "at the DC operating point");
+            }
+            Arrays.fill(b, 0);
+            stampSources(b, 0, scale);
+            stampDiodeCurrents(b);
+            dcLu.solve(b);
+            boolean converged = !limited && (dio.length == 0 || iter > 0) && close(b, sol, dcSize);
+            System.arraycopy(b, 0, sol, 0, dcSize);
+            if (dio.length == 0 || converged) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    // ---------------------------------------------------------------- transient point
+
+    private boolean newton(Rule rule, double h, double t, double scale) {
+        double[] b = new double[size];
+        for (int iter = 0; iter < MAX_NEWTON; iter++) {
+            boolean limited = linearise(x, iter, true);
+            if (needsFactor(rule, h)) {
+                Arrays.fill(matrix, 0);
+                stampLinear(matrix, size, rule, h);
+                for (int d = 0; d < dio.length; d++) {
+                    conductance(matrix, size, dio[d][0], dio[d][1], dioG[d]);
+                }
+                int bad = lu.factor(matrix);
+                if (bad >= 0) {
+                    throw singular(bad, "at t = `" + t + "` s");
+                }
+                factorCount++;
+                factored = true;
+                factoredRule = rule;
+                factoredH = h;
+                System.arraycopy(trG, 0, factoredTrG, 0, trG.length);
+            }
+            Arrays.fill(b, 0);
+            stampSources(b, t, scale);
+            stampHistory(b, rule, h);
+            stampDiodeCurrents(b);
+            lu.solve(b);
+            boolean converged = !limited && (iter > 0 ? close(b, x, size) : true) && linearisationHolds(b);
+            double[] previous = x;
+            x = b;
+            b = previous;
+            if (dio.length == 0 || converged) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private boolean needsFactor(Rule rule, double h) {
+        boolean stale = !factored || rule != factoredRule || h != factoredH || !Arrays.equals(trG, factoredTrG);
+        return stale || diodesChanged;
+    }
+
+    private boolean diodesChanged;
+
+    /**
+     * Linearises every diode at the voltage of {@code sol} (limited by pnjlim against the last
+     * linearisation point); keeps a factored conductance while it is close enough.
+     *
+     * @return whether any voltage was limited (then the iteration has not converged)
+     */
+    private boolean linearise(double[] sol, int iter, boolean keepFactored) {
+        boolean limited = false;
+        diodesChanged = false;
+        for (int d = 0; d < dio.length; d++) {
+            double vd;
+            if (iter == 0 && keepFactored) {
+                vd = dioV[d];
+            } else {
+                double proposed = v(sol, dio[d][0]) - v(sol, dio[d][1]);
+                vd = iter == 0 ? proposed : Junction.limit(proposed, dioIter[d], dioNvt[d], dioCrit[d]);
+                limited |= vd != proposed;
+            }
+            dioIter[d] = vd;
+            double g = Junction.conductance(dioM[d], vd);
+            if (!keepFactored || Math.abs(g - dioG[d]) > CHORD_ABSOLUTE + CHORD_RELATIVE * Math.abs(dioG[d])) {
+                dioG[d] = g;
+                diodesChanged = true;
+            }
+            dioIeq[d] = Junction.current(dioM[d], vd) - dioG[d] * vd;
+        }
+        return limited;
+    }
+
+    private void accept(Rule rule, double h, double t) {
+        for (int c = 0; c < cap.length; c++) {
+            double vNew = v(x, cap[c][0]) - v(x, cap[c][1]);
+            double geq = (rule == Rule.TRAPEZOID ? 2 : 1) * capC[c] / h;
+            capI[c] = rule == Rule.TRAPEZOID ? geq * (vNew - capV[c]) - capI[c] : geq * (vNew - capV[c]);
+            capV[c] = vNew;
+        }
+        for (int k = 0; k < ind.length; k++) {
+            indV[k] = v(x, ind[k][0]) - v(x, ind[k][1]);
+            indJ[k] = x[ind[k][2]];
+        }
+        for (int l = 0; l < line.length; l++) {
+            int[] n = line[l];
+            double v1 = v(x, n[0]) - v(x, n[1]);
+            double v2 = v(x, n[2]) - v(x, n[3]);
+            history[l].add(t, v1, lineG[l] * v1 - lineIh[2 * l], v2, lineG[l] * v2 - lineIh[2 * l + 1]);
+        }
+        for (int d = 0; d < dio.length; d++) {
+            dioV[d] = v(x, dio[d][0]) - v(x, dio[d][1]);
+        }
+    }
+
+    // ---------------------------------------------------------------- stamps
+
+    /** The matrix part that does not depend on the diodes. */
+    private void stampLinear(double[] a, int n, Rule rule, double h) {
+        for (int i = 0; i < nodes; i++) {
+            a[i * n + i] += NODE_GMIN;
+        }
+        for (int r = 0; r < res.length; r++) {
+            conductance(a, n, res[r][0], res[r][1], resG[r]);
+        }
+        for (int k = 0; k < tres.length; k++) {
+            conductance(a, n, tres[k][0], tres[k][1], trG[k]);
+        }
+        if (rule != Rule.DC) {
+            for (int c = 0; c < cap.length; c++) {
+                conductance(a, n, cap[c][0], cap[c][1], (rule == Rule.TRAPEZOID ? 2 : 1) * capC[c] / h);
+            }
+        }
+        for (int k = 0; k < src.length; k++) {
+            branch(a, n, src[k][0], src[k][1], src[k][2]);
+        }
+        for (int k = 0; k < ind.length; k++) {
+            int br = ind[k][2];
+            branch(a, n, ind[k][0], ind[k][1], br);
+            if (rule != Rule.DC) {
+                a[br * n + br] -= (rule == Rule.TRAPEZOID ? 2 : 1) * indL[k] / h;
+            }
+        }
+        for (int l = 0; l < line.length; l++) {
+            int[] p = line[l];
+            if (rule == Rule.DC) {
+                // A 0 V source from port 1's voltage to port 2's: current j into a, out of aRef, out of b, into bRef.
+                int br = size + l;
+                add(a, n, p[0], br, 1);
+                add(a, n, p[1], br, -1);
+                add(a, n, p[2], br, -1);
+                add(a, n, p[3], br, 1);
+                add(a, n, br, p[0], 1);
+                add(a, n, br, p[1], -1);
+                add(a, n, br, p[2], -1);
+                add(a, n, br, p[3], 1);
+            } else {
+                conductance(a, n, p[0], p[1], lineG[l]);
+                conductance(a, n, p[2], p[3], lineG[l]);
+            }
+        }
+    }
+
+    private void stampSources(double[] b, double t, double scale) {
+        for (int k = 0; k < src.length; k++) {
+            Primitive p = srcEl[k];
+            double value = p instanceof Primitive.PwlVoltage pwl ? pwl.valueAt(t) : ((Primitive.DcVoltage) p).volts();
+            b[src[k][2]] += scale * value;
+        }
+    }
+
+    private void stampHistory(double[] b, Rule rule, double h) {
+        boolean trap = rule == Rule.TRAPEZOID;
+        for (int c = 0; c < cap.length; c++) {
+            double geq = (trap ? 2 : 1) * capC[c] / h;
+            inject(b, cap[c][0], cap[c][1], geq * capV[c] + (trap ? capI[c] : 0));
+        }
+        for (int k = 0; k < ind.length; k++) {
+            int br = ind[k][2];
+            double req = (trap ? 2 : 1) * indL[k] / h;
+            b[br] += -req * indJ[k] - (trap ? indV[k] : 0);
+        }
+        for (int l = 0; l < line.length; l++) {
+            int[] p = line[l];
+            inject(b, p[0], p[1], lineIh[2 * l]);
+            inject(b, p[2], p[3], lineIh[2 * l + 1]);
+        }
+    }
+
+    private void stampDiodeCurrents(double[] b) {
+        for (int d = 0; d < dio.length; d++) {
+            inject(b, dio[d][1], dio[d][0], dioIeq[d]);
+        }
+    }
+
+    /**
+     * SPICE's current test: at the new solution's junction voltages, the linearised diode
+     * currents equal the true ones within the tolerances. With it a step whose diodes stay in a
+     * linear region (reverse-biased clamps) needs one solve, not two.
+     */
+    private boolean linearisationHolds(double[] sol) {
+        for (int d = 0; d < dio.length; d++) {
+            double vd = v(sol, dio[d][0]) - v(sol, dio[d][1]);
+            double linear = dioG[d] * vd + dioIeq[d];
+            double exact = Junction.current(dioM[d], vd);
+            if (!(Math.abs(exact - linear) <= RELTOL * Math.max(Math.abs(exact), Math.abs(linear)) + ABSTOL)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Whether two solutions agree within the Newton tolerances. */
+    private boolean close(double[] now, double[] before, int n) {
+        for (int i = 0; i < n; i++) {
+            double tol = RELTOL * Math.max(Math.abs(now[i]), Math.abs(before[i])) + (i < nodes ? VNTOL : ABSTOL);
+            if (!(Math.abs(now[i] - before[i]) <= tol)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private SolveException singular(int row, String when) {
+        return new SolveException(FailureKind.SINGULAR_MATRIX, "the circuit matrix is singular " + when + " near "
+                + (row < size ? net.describe(row) : "a transmission line's DC connection")
+                + " (a node without a DC path to ground, or a loop of voltage sources, lines and inductors)");
+    }
+
+    private static void conductance(double[] a, int n, int i, int j, double g) {
+        add(a, n, i, i, g);
+        add(a, n, j, j, g);
+        add(a, n, i, j, -g);
+        add(a, n, j, i, -g);
+    }
+
+    /** A branch current {@code br} leaving node {@code p}, entering {@code m}, with {@code v(p) − v(m)} in row br. */
+    private static void branch(double[] a, int n, int p, int m, int br) {
+        add(a, n, p, br, 1);
+        add(a, n, m, br, -1);
+        add(a, n, br, p, 1);
+        add(a, n, br, m, -1);
+    }
+
+    private static void add(double[] a, int n, int row, int col, double value) {
+        if (row >= 0 && col >= 0) {
+            a[row * n + col] += value;
+        }
+    }
+
+    /** A current {@code amps} flowing out of {@code from} and into {@code to} through a source. */
+    private static void inject(double[] b, int to, int from, double amps) {
+        if (to >= 0) {
+            b[to] += amps;
+        }
+        if (from >= 0) {
+            b[from] -= amps;
+        }
+    }
+
+    private static double v(double[] sol, int node) {
+        return node < 0 ? 0 : sol[node];
+    }
+
+    private static double[] unbox(List<Double> values) {
+        return values.stream().mapToDouble(Double::doubleValue).toArray();
+    }
+}
