@@ -11,6 +11,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.ringsweep.runner.cli.Main;
@@ -107,5 +108,34 @@ class DemoBoardTests {
         // lines-and-terminations.md §7: Fast-mode R_p(min) at 3.3 V is 966.7 Ω; R_p(max) = 300 ns / (0.8473 · Cb)
         String warnings = sda.get("warnings").toString();
         assertTrue(warnings.contains("R20 = 4.7 kΩ is inside the Fast-mode window [966.7 Ω, "), warnings);
+    }
+
+    @Test
+    void builtInEngineGivesTheSameVerdictsAsNgspiceOnTheDemoBoard(@TempDir Path builtinOut) throws Exception {
+        Ngspice.require();
+        StringWriter stdout = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.run(new String[] {"demo", "--board", BOARD.toString(), "--out", builtinOut.toString(), "--engine", "builtin"},
+                new PrintWriter(stdout), new PrintWriter(err));
+        assertEquals(0, code, () -> stdout + "\n" + err);
+        ObjectMapper json = new ObjectMapper();
+        Map<String, JsonNode> reference = new java.util.HashMap<>();
+        for (JsonNode r : runDemo(null)) {
+            reference.put(r.get("net").asText() + "/" + r.get("corner").asText(), r);
+        }
+        for (String line : Files.readAllLines(builtinOut.resolve("results.jsonl"))) {
+            JsonNode r = json.readTree(line);
+            assertEquals("builtin", r.get("engine").get("name").asText());
+            JsonNode ref = reference.get(r.get("net").asText() + "/" + r.get("corner").asText());
+            assertEquals(ref.get("verdict").asText(), r.get("verdict").asText(), r.get("net").asText());
+            // ngspice as the reference simulator: peaks within 1 % of the 3.3 V (or 1.8 V) swing.
+            for (int i = 0; i < r.get("receivers").size(); i++) {
+                double swing = r.get("net").asText().contains("1V8") ? 1.8 : 3.3;
+                assertEquals(ref.get("receivers").get(i).get("rise").get("v_max").asDouble(),
+                        r.get("receivers").get(i).get("rise").get("v_max").asDouble(), 0.01 * swing, r.get("net").asText());
+                assertEquals(ref.get("receivers").get(i).get("fall").get("v_min").asDouble(),
+                        r.get("receivers").get(i).get("fall").get("v_min").asDouble(), 0.01 * swing, r.get("net").asText());
+            }
+        }
     }
 }

@@ -22,6 +22,7 @@ import org.ringsweep.generators.elaborate.Elaboration;
 import org.ringsweep.generators.elaborate.Elaborator;
 import org.ringsweep.generators.elaborate.ReceiverProbe;
 import org.ringsweep.generators.names.NodeNamer;
+import org.ringsweep.runner.engine.CircuitEngine;
 import org.ringsweep.runner.engine.FailureKind;
 import org.ringsweep.runner.engine.NgspiceBatch;
 import org.ringsweep.runner.engine.NgspiceEngine;
@@ -167,7 +168,11 @@ public final class PointRunner {
         SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine for run()"));
         String stem = deckStem(spec);
         WrittenDeck written = writeDeck(net, elab, stem, false);
-        return finish(net, spec, elab, eng, stem, written, eng.run(job(written, stem, elab)));
+        // An in-process engine solves the circuit itself; the deck is still written for the record.
+        SimulationOutcome outcome = eng instanceof CircuitEngine inProcess
+                ? inProcess.solve(elab.circuit(), timeout)
+                : eng.run(job(written, stem, elab));
+        return finish(net, spec, elab, eng, stem, written, outcome);
     }
 
     /**
@@ -248,7 +253,9 @@ public final class PointRunner {
         Net applied = net.with(spec.overrides());
         List<String> warnings = new ArrayList<>(elab.warnings());
         // An interrupted run (Ctrl-C, a stopping batch) is not retried: its record is discarded anyway.
-        if (outcome instanceof SimulationOutcome.Failure first && isRetryable(first.kind()) && !Thread.currentThread().isInterrupted()) {
+        // The conservative options are deck options: only a deck-driven engine can retry with them.
+        if (outcome instanceof SimulationOutcome.Failure first && isRetryable(first.kind()) && !(eng instanceof CircuitEngine)
+                && !Thread.currentThread().isInterrupted()) {
             String retryStem = stem + "-conservative";
             written = writeDeck(net, elab, retryStem, true);
             outcome = eng.run(job(written, retryStem, elab));

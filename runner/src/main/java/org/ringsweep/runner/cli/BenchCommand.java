@@ -34,6 +34,7 @@ public final class BenchCommand implements Callable<Integer> {
         out.flush();
         out.println(org.ringsweep.runner.bench.StoreBenchmark.run(work.resolve("store")));
         out.flush();
+        out.flush();
         var located = NgspiceEngine.locate(System.getenv());
         if (located.isEmpty()) {
             out.println("overhead: skipped, ngspice not found");
@@ -42,6 +43,8 @@ public final class BenchCommand implements Callable<Integer> {
         out.println(OverheadBenchmark.run(work.resolve("overhead"), located.get().binary(), nets));
         out.flush();
         out.println(org.ringsweep.runner.bench.BatchBenchmark.run(work.resolve("batch"), located.get().binary()));
+        out.flush();
+        out.println(org.ringsweep.runner.bench.EngineBenchmark.run(work.resolve("engines"), located.get().binary()));
         return ExitCodes.OK;
     }
 }

@@ -8,7 +8,7 @@ public enum EngineChoice {
     AUTO,
     /** ngspice only. */
     NGSPICE,
-    /** The in-process engine (not available in this version). */
+    /** The in-process engine (runner.engine.builtin). */
     BUILTIN;
 
     /**

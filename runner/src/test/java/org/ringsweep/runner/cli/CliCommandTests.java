@@ -92,21 +92,38 @@ class CliCommandTests {
         assertTrue(run.out().contains("r_out") && run.out().contains("ohm"), run.out());
     }
 
-    @Test
-    void noEngineFoundExitsThreeWithAHint() throws Exception {
-        // A child JVM whose PATH has no ngspice and no RINGSWEEP_NGSPICE.
-        ProcessBuilder pb = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-cp", System.getProperty("java.class.path"), Main.class.getName(),
-                "check", "--out", out.toString(), net("matched-series.yaml"));
+    private Process childWithoutNgspice(String... args) throws Exception {
+        List<String> cmd = new java.util.ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), Main.class.getName()));
+        cmd.addAll(List.of(args));
+        ProcessBuilder pb = new ProcessBuilder(cmd);
         pb.environment().put("PATH", out.toString());
         pb.environment().remove("RINGSWEEP_NGSPICE");
         pb.redirectErrorStream(true);
-        File log = out.resolve("log.txt").toFile();
-        pb.redirectOutput(log);
+        pb.redirectOutput(out.resolve("log.txt").toFile());
         Process p = pb.start();
-        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
-        String text = Files.readString(log.toPath());
+        assertTrue(p.waitFor(120, TimeUnit.SECONDS));
+        return p;
+    }
+
+    @Test
+    void ngspiceAskedForButMissingExitsThreeWithAHint() throws Exception {
+        Process p = childWithoutNgspice("check", "--engine", "ngspice", "--out", out.toString(), net("matched-series.yaml"));
+        String text = Files.readString(out.resolve("log.txt"));
         assertEquals(ExitCodes.SIMULATION, p.exitValue(), text);
         assertTrue(text.contains("ngspice"), text);
+    }
+
+    @Test
+    void withoutNgspiceAutoRunsTheBuiltInEngine() throws Exception {
+        Process p = childWithoutNgspice("check", "--json", "--out", out.toString(), net("matched-series.yaml"));
+        String text = Files.readString(out.resolve("log.txt"));
+        assertEquals(ExitCodes.OK, p.exitValue(), text);
+        JsonNode r = new com.fasterxml.jackson.databind.ObjectMapper().readTree(
+                text.lines().filter(l -> l.startsWith("{")).findFirst().orElseThrow());
+        assertEquals("builtin", r.get("engine").get("name").asText());
+        // lines-and-terminations.md §2 example 2: r_out + R = Z0 reaches the 3.3 V rail without overshoot.
+        assertEquals(3.3, r.get("receivers").get(0).get("rise").get("v_final").asDouble(), 0.005 * 3.3);
+        assertTrue(r.get("receivers").get(0).get("rise").get("overshoot_v").asDouble() < 0.03 * 3.3);
     }
 }
