@@ -34,7 +34,6 @@ public final class BenchCommand implements Callable<Integer> {
         out.flush();
         out.println(org.ringsweep.runner.bench.StoreBenchmark.run(work.resolve("store")));
         out.flush();
-        out.flush();
         var located = NgspiceEngine.locate(System.getenv());
         if (located.isEmpty()) {
             out.println("overhead: skipped, ngspice not found");
