@@ -175,7 +175,9 @@ final class CheckFlow {
                 }
             }
         }
-        ReportStep.run(err, common.quiet, () -> org.ringsweep.runner.report.Reports.afterCheck(common.out, records, sets));
+        if (!common.noReport) {
+            ReportStep.run(err, common.quiet, () -> org.ringsweep.runner.report.Reports.afterCheck(common.out, records, sets));
+        }
         if (!common.json) {
             ResultTable.print(records, out, common.quiet);
             if (records.stream().map(ResultRecord::net).distinct().count() > 1) {

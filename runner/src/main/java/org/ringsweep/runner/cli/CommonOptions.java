@@ -27,6 +27,9 @@ public final class CommonOptions {
             description = "Folder of plugin jars whose driver models, receiver models and checks are added to the built-in ones.")
     Path plugins;
 
+    @Option(names = "--no-report", description = "Skip report.html and junit.xml (they can be made later with `ringsweep report OUT`).")
+    boolean noReport;
+
     @Option(names = "--timeout", paramLabel = "SECONDS", defaultValue = "120",
             description = "Wall-clock limit per simulation in seconds (default: ${DEFAULT-VALUE}).")
     double timeoutSeconds;

@@ -28,6 +28,7 @@ import org.ringsweep.runner.check.PointRunner;
 import org.ringsweep.runner.engine.EngineChoice;
 import org.ringsweep.runner.engine.EngineNotFoundException;
 import org.ringsweep.runner.engine.EngineSelector;
+import org.ringsweep.runner.engine.NgspiceEngine;
 import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.input.InputException;
 import org.ringsweep.runner.input.NetFileLoader;
@@ -97,6 +98,11 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Option(names = "--resume", description = "Continue the sweep stored under --out: run only the points not yet finished.")
     boolean resume;
+
+    @Option(names = "--verify", paramLabel = "PERCENT",
+            description = "With the built-in engine: re-simulate this share of the points with ngspice (e.g. 5%%), report the largest"
+                    + " difference per metric and flag points beyond tolerance in their records.")
+    String verify;
 
     @Override
     public Integer call() throws InterruptedException {
@@ -209,14 +215,83 @@ public final class SweepCommand implements Callable<Integer> {
                     // the hook is running: Ctrl-C
                 }
             }
+            if (verify != null && !batch.stopped()) {
+                int code = verify(plans, store, engine, elaborator, decks, timeout, registry, out, err);
+                if (code != ExitCodes.OK) {
+                    return code;
+                }
+            }
             List<StoredRow> rows = store.rows();
             writeJsonLines(rows);
-            ReportStep.run(err, common.quiet, () -> org.ringsweep.runner.report.Reports.afterSweep(common.out, store));
+            if (!common.noReport) {
+                ReportStep.run(err, common.quiet, () -> org.ringsweep.runner.report.Reports.afterSweep(common.out, store));
+            }
             if (!common.quiet) {
                 summary(store, plans, out);
             }
             return exitCode(rows, plans);
         }
+    }
+
+    /** {@code --verify}: the chosen share of the points again on ngspice, compared metric by metric. */
+    private int verify(List<SweepPlanner.Plan> plans, ResultStore store, SimulationEngine engine, Elaborator elaborator,
+                       DeckWriter decks, Duration timeout, PluginRegistry registry, PrintWriter out, PrintWriter err) {
+        double share;
+        try {
+            share = org.ringsweep.api.quantity.Quantities.parse(verify, org.ringsweep.api.quantity.Dimension.DIMENSIONLESS);
+        } catch (IllegalArgumentException e) {
+            err.println("ringsweep: sweep: --verify: expected a share such as 5%, found `" + verify + "`");
+            return ExitCodes.INPUT;
+        }
+        if (!(share > 0 && share <= 1)) {
+            err.println("ringsweep: sweep: --verify: expected a share above 0 % and at most 100 %, found `" + verify + "`");
+            return ExitCodes.INPUT;
+        }
+        if (engine instanceof NgspiceEngine) {
+            err.println("ringsweep: warning: --verify compares the built-in engine with ngspice; this sweep ran on ngspice already");
+            return ExitCodes.OK;
+        }
+        Optional<NgspiceEngine> ngspice = NgspiceEngine.locate(System.getenv());
+        if (ngspice.isEmpty()) {
+            err.println("ringsweep: sweep: --verify needs ngspice: " + NgspiceEngine.whyNotFound(System.getenv()));
+            return ExitCodes.SIMULATION;
+        }
+        Map<String, org.ringsweep.runner.results.ResultRecord> results = new LinkedHashMap<>();
+        Map<String, StoredRow> rows = new LinkedHashMap<>();
+        for (StoredRow r : store.rows()) {
+            rows.put(r.netHash() + "|" + r.pointKey(), r);
+        }
+        List<BatchRunner.Task> chosen = new ArrayList<>();
+        Map<BatchRunner.Task, Double> swings = new java.util.HashMap<>();
+        PointRunner checker = new PointRunner(elaborator, null, Optional.empty(), common.out, timeout);
+        for (SweepPlanner.Plan plan : plans) {
+            for (PointRunner.PointSpec p : plan.points()) {
+                String key = PointKey.of(p.corner(), p.swept());
+                StoredRow row = rows.get(plan.net().sourceHash() + "|" + key);
+                if (row != null && org.ringsweep.runner.batch.Verification.chosen(plan.net().sourceHash(), key, share)) {
+                    BatchRunner.Task t = new BatchRunner.Task(plan.net(), p, key);
+                    chosen.add(t);
+                    results.put(key, org.ringsweep.runner.report.Reports.parseRecord(row.recordJson(), store.file().toString()));
+                    swings.put(t, checker.elaborate(plan.net(), p).swing());
+                }
+            }
+        }
+        PointRunner reference = new PointRunner(elaborator, decks, Optional.of(ngspice.get()), common.out.resolve("verify"), timeout,
+                registry.checks());
+        org.ringsweep.runner.batch.Verification.Report report =
+                org.ringsweep.runner.batch.Verification.run(chosen, results, reference, swings::get);
+        out.printf(Locale.ROOT, "Verification against ngspice: %d point(s) re-simulated (%s of the sweep)%n", report.compared(), verify);
+        report.worst().values().forEach(w -> out.printf(Locale.ROOT, "  largest difference %-10s %.4g%s%n", w.metric(), w.difference(),
+                w.beyondTolerance() ? "  BEYOND TOLERANCE <<" : ""));
+        for (Map.Entry<String, String> f : report.flagged().entrySet()) {
+            out.println("  FLAGGED " + f.getKey() + ": " + f.getValue());
+            org.ringsweep.runner.results.ResultRecord r = results.get(f.getKey());
+            List<String> warnings = new ArrayList<>(r.warnings());
+            warnings.add("verification against ngspice differs beyond tolerance: " + f.getValue());
+            store.put(new org.ringsweep.runner.results.ResultRecord(r.net(), r.corner(), r.point(), r.engineName(), r.engineVersion(),
+                    r.verdict(), r.receivers(), r.deck(), r.error(), r.source(), r.sourceHash(), r.defaulted(), warnings), f.getKey());
+        }
+        return ExitCodes.OK;
     }
 
     /** results.jsonl beside the store: every record, for tools that read JSON Lines. */

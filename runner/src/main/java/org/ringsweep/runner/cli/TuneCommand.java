@@ -142,7 +142,9 @@ public final class TuneCommand implements Callable<Integer> {
             result.evaluated().forEach(e -> results.append(e.record()));
             result.checks().forEach(c -> results.append(c.record()));
         }
-        ReportStep.run(err, common.quiet, () -> org.ringsweep.runner.report.Reports.afterTune(common.out, result));
+        if (!common.noReport) {
+            ReportStep.run(err, common.quiet, () -> org.ringsweep.runner.report.Reports.afterTune(common.out, result));
+        }
         if (common.json) {
             out.println(json(result, tol));
         } else {

@@ -222,4 +222,16 @@ public final class Reports {
         String v = Reports.class.getPackage().getImplementationVersion();
         return v == null ? "(development build)" : v;
     }
+
+    /**
+     * Reads one {@code ringsweep/result-1} record back from its JSON line (for tools that compare
+     * stored records, e.g. {@code sweep --verify}).
+     *
+     * @param json  the record as one line of JSON
+     * @param where file and line (or store row) for messages
+     * @throws ReportException when the text is not a result record
+     */
+    public static ResultRecord parseRecord(String json, String where) {
+        return RecordReader.parse(json, where);
+    }
 }
