@@ -111,9 +111,11 @@ public final class ScreenCommand implements Callable<Integer> {
         }
         for (ScreenResult r : ranked) {
             r.notes().forEach(n -> out.println("  note " + r.net() + ": " + n));
+            r.pullUpWindow().forEach(n -> out.println("  pull-up " + r.net() + ": " + n));
         }
         out.println();
-        out.println("Open-drain pull-up windows: not screened (no open-drain driver model in this version).");
+        out.println("Open-drain nets list their I2C pull-up window per mode above (UM10204 section 7.1: R_p(min) from V_DD, V_OL, I_OL;"
+                + " R_p(max) from the rise-time limit and the bus capacitance).");
     }
 
     private static String f(String format, double v) {

@@ -38,8 +38,10 @@ import org.ringsweep.runner.sweep.ESeries;
  * with ΓL = +1 for high-impedance CMOS inputs (§2);</li>
  * <li>the series resistor {@code Z0 − r_out} and the nearest E24 value (§4, IEC 60063).</li>
  * </ul>
- * Only the first driver of a net is screened. The open-drain pull-up window needs an open-drain
- * driver model, which this version does not have; such nets would show a note.
+ * Only the first driver of a net is screened. For an {@code open-drain} driver the I²C pull-up
+ * window (R_p(min) from V_DD, V_OL and I_OL, R_p(max) from the rise-time limit and the bus
+ * capacitance, per I²C mode: UM10204 §7.1) is taken from the elaboration, which computes it
+ * from the net's pull-up resistor, input, pin and line capacitances.
  */
 public final class NetScreen {
     private final ModelCatalog catalog;
@@ -128,9 +130,19 @@ public final class NetScreen {
         double suggested = z0 - rOut;
         double e24 = suggested > 0 ? ESeries.nearest(ESeries.Series.E24, suggested) : Double.NaN;
         double ratio = Math.max(0, longest) / tr;
+        List<String> pullUp = new ArrayList<>();
+        if (driver.model().equals(org.ringsweep.generators.models.BuiltinModels.OPEN_DRAIN)) {
+            try {
+                new org.ringsweep.generators.elaborate.Elaborator().elaborate(net, "screen").warnings().stream()
+                        .filter(w -> w.contains("window") || w.contains("pull-up") || w.contains("bus capacitance"))
+                        .forEach(pullUp::add);
+            } catch (RuntimeException e) {
+                notes.add("pull-up window not computed: " + e.getMessage());
+            }
+        }
         return new ScreenResult(net.name(), file, driver.pin(), edgeRef, riseGiven, tr, vs, vs / full, 0.5 / tr, 0.35 / tr,
                 total, Math.max(0, longest), farthest == null ? "" : farthest.pin(), ratio, LineClass.of(ratio), z0, rOut,
-                rSeries, gammaSource, gammaLoad, launch, far, far - vs, suggested > 0 ? suggested : Double.NaN, e24, notes);
+                rSeries, gammaSource, gammaLoad, launch, far, far - vs, suggested > 0 ? suggested : Double.NaN, e24, notes, pullUp);
     }
 
     private static DefaultWeightedEdge edge(Graph<String, DefaultWeightedEdge> g, String a, String b, double w) {

@@ -50,7 +50,12 @@ public final class ScreenJson {
         num(o, "overshoot_first_v", r.overshootFirst());
         num(o, "series_r_ohm", r.suggestedSeries());
         num(o, "series_r_e24_ohm", r.suggestedE24());
-        o.putNull("pull_up");
+        if (r.pullUpWindow().isEmpty()) {
+            o.putNull("pull_up");
+        } else {
+            com.fasterxml.jackson.databind.node.ArrayNode pullUp = o.putArray("pull_up");
+            r.pullUpWindow().forEach(pullUp::add);
+        }
         com.fasterxml.jackson.databind.node.ArrayNode notes = o.putArray("notes");
         r.notes().forEach(notes::add);
         try {

@@ -32,16 +32,19 @@ import java.util.List;
  * @param suggestedSeries  Z0 − rOut (ohm), NaN when rOut ≥ Z0
  * @param suggestedE24     the nearest IEC 60063 E24 value to it (ohm), NaN when none
  * @param notes            assumptions that limit the figures
+ * @param pullUpWindow     for open-drain nets, the I²C pull-up window per mode (and whether the pull-up lies in it); empty otherwise
  */
 public record ScreenResult(String net, String file, String driver, String edgeRef, double riseGiven, double rise1090,
         double swing, double slew, double knee, double bandwidth, double totalDelay, double longestDelay, String farthest,
         double ratio, LineClass lineClass, double z0, double rOut, double rSeries, double gammaSource, double gammaLoad,
-        double launch, double farFirst, double overshootFirst, double suggestedSeries, double suggestedE24, List<String> notes) {
+        double launch, double farFirst, double overshootFirst, double suggestedSeries, double suggestedE24, List<String> notes,
+        List<String> pullUpWindow) {
     /** The record format tag of {@code --json}. */
     public static final String FORMAT = "ringsweep/screen-1";
 
     /** Copies the notes. */
     public ScreenResult {
         notes = List.copyOf(notes);
+        pullUpWindow = List.copyOf(pullUpWindow);
     }
 }
