@@ -19,9 +19,6 @@ import org.ringsweep.generators.elaborate.Elaborator;
 import org.ringsweep.runner.check.Caution;
 import org.ringsweep.runner.check.PointRunner;
 import org.ringsweep.runner.check.ResultsFile;
-import org.ringsweep.runner.engine.EngineChoice;
-import org.ringsweep.runner.engine.EngineNotFoundException;
-import org.ringsweep.runner.engine.EngineSelector;
 import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.input.InputException;
 import org.ringsweep.runner.input.NetFileLoader;
@@ -70,7 +67,7 @@ final class CheckFlow {
         NetFileLoader loader = new NetFileLoader(catalog);
         PointParser points = new PointParser(catalog);
         Elaborator elaborator = registry.elaborator();
-        Duration timeout = Duration.ofMillis(Math.round(common.timeoutSeconds * 1000));
+        Duration timeout = common.timeout();
         Map<Net, List<PointRunner.PointSpec>> plan = new LinkedHashMap<>();
         Map<Net, Map<PointRunner.PointSpec, Elaboration>> elaborated = new java.util.IdentityHashMap<>();
         // Points whose plugin model threw while elaborating: error records, not input errors.
@@ -116,26 +113,18 @@ final class CheckFlow {
         }
         DeckWriter decks;
         try {
-            decks = common.templates == null ? new DeckWriter() : DeckWriter.withTemplateDir(common.templates);
+            decks = common.deckWriter();
         } catch (RuntimeException e) {
             err.println("ringsweep: --templates " + common.templates + ": " + e.getMessage());
             return new Outcome(ExitCodes.INPUT, List.of());
         }
         Optional<SimulationEngine> engine = Optional.empty();
         if (simulate) {
-            EngineChoice choice;
-            try {
-                choice = EngineChoice.parse(common.engine);
-            } catch (IllegalArgumentException e) {
-                err.println("ringsweep: --engine: " + e.getMessage());
-                return new Outcome(ExitCodes.INPUT, List.of());
+            CommonOptions.EngineSelection selection = common.selectEngine(err);
+            if (selection.engine().isEmpty()) {
+                return new Outcome(selection.exitCode(), List.of());
             }
-            try {
-                engine = Optional.of(EngineSelector.select(choice, System.getenv()));
-            } catch (EngineNotFoundException e) {
-                err.println("ringsweep: " + e.getMessage());
-                return new Outcome(ExitCodes.SIMULATION, List.of());
-            }
+            engine = selection.engine();
         }
         PointRunner runner = new PointRunner(elaborator, decks, engine, common.out, timeout, registry.checks());
         if (!simulate) {

@@ -33,4 +33,39 @@ public final class CommonOptions {
     @Option(names = "--timeout", paramLabel = "SECONDS", defaultValue = "120",
             description = "Wall-clock limit per simulation in seconds (default: ${DEFAULT-VALUE}).")
     double timeoutSeconds;
+
+    /** The per-simulation timeout. */
+    java.time.Duration timeout() {
+        return java.time.Duration.ofMillis(Math.round(timeoutSeconds * 1000));
+    }
+
+    /** The deck writer: the built-in templates, or those under {@code --templates}. */
+    org.ringsweep.generators.deck.DeckWriter deckWriter() {
+        return templates == null ? new org.ringsweep.generators.deck.DeckWriter()
+                : org.ringsweep.generators.deck.DeckWriter.withTemplateDir(templates);
+    }
+
+    /**
+     * The engine {@code --engine} names, or the exit code after printing why there is none:
+     * 2 for an unknown choice, 3 when the chosen engine is not found.
+     */
+    record EngineSelection(java.util.Optional<org.ringsweep.runner.engine.SimulationEngine> engine, int exitCode) {
+    }
+
+    EngineSelection selectEngine(java.io.PrintWriter err) {
+        org.ringsweep.runner.engine.EngineChoice choice;
+        try {
+            choice = org.ringsweep.runner.engine.EngineChoice.parse(engine);
+        } catch (IllegalArgumentException e) {
+            err.println("ringsweep: --engine: " + e.getMessage());
+            return new EngineSelection(java.util.Optional.empty(), ExitCodes.INPUT);
+        }
+        try {
+            return new EngineSelection(java.util.Optional.of(
+                    org.ringsweep.runner.engine.EngineSelector.select(choice, System.getenv())), ExitCodes.OK);
+        } catch (org.ringsweep.runner.engine.EngineNotFoundException e) {
+            err.println("ringsweep: " + e.getMessage());
+            return new EngineSelection(java.util.Optional.empty(), ExitCodes.SIMULATION);
+        }
+    }
 }

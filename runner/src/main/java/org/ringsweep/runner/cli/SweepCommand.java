@@ -25,9 +25,6 @@ import org.ringsweep.runner.batch.BatchRunner;
 import org.ringsweep.runner.batch.Progress;
 import org.ringsweep.runner.check.Caution;
 import org.ringsweep.runner.check.PointRunner;
-import org.ringsweep.runner.engine.EngineChoice;
-import org.ringsweep.runner.engine.EngineNotFoundException;
-import org.ringsweep.runner.engine.EngineSelector;
 import org.ringsweep.runner.engine.NgspiceEngine;
 import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.input.InputException;
@@ -127,7 +124,7 @@ public final class SweepCommand implements Callable<Integer> {
             err.println("ringsweep: sweep: --batch: expected at least 1, found " + batchSize);
             return ExitCodes.INPUT;
         }
-        Duration timeout = Duration.ofMillis(Math.round(common.timeoutSeconds * 1000));
+        Duration timeout = common.timeout();
         List<SweepPlanner.Plan> plans = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
         try {
@@ -156,16 +153,11 @@ public final class SweepCommand implements Callable<Integer> {
             return ExitCodes.INPUT;
         }
         warnings.forEach(w -> err.println("ringsweep: warning: " + w));
-        SimulationEngine engine;
-        try {
-            engine = EngineSelector.select(EngineChoice.parse(common.engine), System.getenv());
-        } catch (IllegalArgumentException e) {
-            err.println("ringsweep: --engine: " + e.getMessage());
-            return ExitCodes.INPUT;
-        } catch (EngineNotFoundException e) {
-            err.println("ringsweep: " + e.getMessage());
-            return ExitCodes.SIMULATION;
+        CommonOptions.EngineSelection selection = common.selectEngine(err);
+        if (selection.engine().isEmpty()) {
+            return selection.exitCode();
         }
+        SimulationEngine engine = selection.engine().get();
         boolean existed = Files.exists(common.out.resolve(ResultStore.FILE_NAME));
         try (ResultStore store = ResultStore.open(common.out)) {
             if (existed && !resume && !store.rows().isEmpty()) {
@@ -200,7 +192,7 @@ public final class SweepCommand implements Callable<Integer> {
                         skipped > 0 ? ", " + skipped + " already finished" : "");
                 out.flush();
             }
-            DeckWriter decks = common.templates == null ? new DeckWriter() : DeckWriter.withTemplateDir(common.templates);
+            DeckWriter decks = common.deckWriter();
             PointRunner runner = new PointRunner(elaborator, decks, Optional.of(engine), common.out, timeout, registry.checks());
             BatchRunner batch = new BatchRunner(runner, workers, batchSize);
             Thread hook = new Thread(batch::stop, "ringsweep-stop");

@@ -5,7 +5,6 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.time.Duration;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
@@ -21,9 +20,6 @@ import org.ringsweep.generators.elaborate.ElaborationException;
 import org.ringsweep.runner.check.Caution;
 import org.ringsweep.runner.check.PointRunner;
 import org.ringsweep.runner.check.ResultsFile;
-import org.ringsweep.runner.engine.EngineChoice;
-import org.ringsweep.runner.engine.EngineNotFoundException;
-import org.ringsweep.runner.engine.EngineSelector;
 import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.input.InputException;
 import org.ringsweep.runner.input.NetFileLoader;
@@ -124,19 +120,14 @@ public final class TuneCommand implements Callable<Integer> {
             err.println("ringsweep: tune: no " + s.get() + " value lies between " + from + " and " + to);
             return ExitCodes.INPUT;
         }
-        SimulationEngine engine;
-        try {
-            engine = EngineSelector.select(EngineChoice.parse(common.engine), System.getenv());
-        } catch (IllegalArgumentException e) {
-            err.println("ringsweep: --engine: " + e.getMessage());
-            return ExitCodes.INPUT;
-        } catch (EngineNotFoundException e) {
-            err.println("ringsweep: " + e.getMessage());
-            return ExitCodes.SIMULATION;
+        CommonOptions.EngineSelection selection = common.selectEngine(err);
+        if (selection.engine().isEmpty()) {
+            return selection.exitCode();
         }
-        DeckWriter decks = common.templates == null ? new DeckWriter() : DeckWriter.withTemplateDir(common.templates);
+        SimulationEngine engine = selection.engine().get();
+        DeckWriter decks = common.deckWriter();
         PointRunner runner = new PointRunner(registry.elaborator(), decks, Optional.of(engine), common.out,
-                Duration.ofMillis(Math.round(common.timeoutSeconds * 1000)), registry.checks());
+                common.timeout(), registry.checks());
         TuneResult result = new TuneSearch(runner).tune(net, target, low.dimension(), candidates, tol);
         try (ResultsFile results = ResultsFile.create(common.out)) {
             result.evaluated().forEach(e -> results.append(e.record()));
