@@ -4,53 +4,35 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.ringsweep.runner.testing.MalformedCase;
 
 /** Bad input through the command line: exit 2, a message naming file, line and key, no stack trace, nothing simulated. */
 class CliInputErrorTests {
     @TempDir
     Path out;
 
-    static Stream<Path> malformedFiles() throws IOException {
-        Path dir = CliRun.resource("malformed");
-        try (Stream<Path> s = Files.list(dir)) {
-            List<Path> files = s.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
-            return files.stream();
-        }
-    }
-
-    private static String header(Path file, String name) throws IOException {
-        for (String line : Files.readAllLines(file)) {
-            if (line.startsWith("# " + name + ":")) {
-                return line.substring(name.length() + 3).strip();
-            }
-        }
-        return "";
+    static Stream<MalformedCase> malformedFiles() {
+        return MalformedCase.under("/malformed");
     }
 
     @ParameterizedTest(name = "{0}")
     @MethodSource("malformedFiles")
-    void malformedNetFileExitsTwoNamingFileLineAndKey(Path file) throws IOException {
-        CliRun run = CliRun.of("check", "--out", out.toString(), file.toString());
+    void malformedNetFileExitsTwoNamingFileLineAndKey(MalformedCase x) {
+        CliRun run = CliRun.of("check", "--out", out.toString(), x.file().toString());
         assertEquals(ExitCodes.INPUT, run.exitCode(), run.err());
-        assertTrue(run.err().contains(file.getFileName().toString()), run.err());
-        String line = header(file, "line");
-        if (!line.isEmpty()) {
-            assertTrue(run.err().contains(":" + line + ":"), () -> "line " + line + " not in: " + run.err());
+        assertTrue(run.err().contains(x.file().getFileName().toString()), run.err());
+        assertTrue(run.err().contains(":" + x.line() + ":"), () -> "line " + x.line() + " not in: " + run.err());
+        if (!x.key().isEmpty()) {
+            assertTrue(run.err().contains(x.key()), () -> "key " + x.key() + " not in: " + run.err());
         }
-        String key = header(file, "key");
-        if (!key.isEmpty()) {
-            assertTrue(run.err().contains(key), () -> "key " + key + " not in: " + run.err());
-        }
-        assertTrue(run.err().contains(header(file, "expect")), run.err());
+        assertTrue(run.err().contains(x.fragment()), run.err());
         assertFalse(run.err().contains("\tat ") || run.err().contains("Exception"), "no stack trace: " + run.err());
         assertFalse(Files.exists(out.resolve("results.jsonl")), "nothing simulated");
     }

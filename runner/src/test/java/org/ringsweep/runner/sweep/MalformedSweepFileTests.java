@@ -4,16 +4,14 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.IOException;
 import java.net.URISyntaxException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.ringsweep.runner.testing.MalformedCase;
 import org.ringsweep.runner.input.InputException;
 
 /**
@@ -25,56 +23,18 @@ import org.ringsweep.runner.input.InputException;
 class MalformedSweepFileTests {
     private final SweepFileLoader loader = new SweepFileLoader();
 
-    /** The three header lines of a malformed file. */
-    record Expectation(Path file, String fragment, String key, int line) {
-        static Expectation of(Path file) {
-            try {
-                List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
-                return new Expectation(file, header(lines.get(0), "# expect:"), header(lines.get(1), "# key:"),
-                        Integer.parseInt(header(lines.get(2), "# line:")));
-            } catch (IOException e) {
-                throw new IllegalStateException(e);
-            }
-        }
-
-        private static String header(String line, String prefix) {
-            if (!line.startsWith(prefix)) {
-                throw new IllegalStateException("header line `" + line + "` should start with `" + prefix + "`");
-            }
-            return line.substring(prefix.length()).strip();
-        }
-
-        @Override
-        public String toString() {
-            return file.getFileName().toString();
-        }
-    }
-
-    static Stream<Expectation> malformedFiles() throws IOException, URISyntaxException {
-        Path dir = Path.of(MalformedSweepFileTests.class.getResource("/malformed-sweep").toURI());
-        try (Stream<Path> files = Files.list(dir)) {
-            return files.filter(f -> f.toString().endsWith(".yaml")).sorted().map(Expectation::of).toList().stream();
-        }
+    static Stream<MalformedCase> malformedFiles() {
+        return MalformedCase.under("/malformed-sweep");
     }
 
     @ParameterizedTest(name = "{0}")
     @MethodSource("malformedFiles")
-    void reportsFileLineKeyAndWhatWasExpected(Expectation x) {
-        InputException e = assertThrows(InputException.class, () -> loader.load(x.file()));
-        String m = e.getMessage();
-        assertTrue(m.contains(x.file().getFileName().toString()), m);
-        assertTrue(m.contains(":" + x.line() + ":"), m);
-        assertTrue(m.contains(x.fragment()), m);
-        assertEquals(x.line(), e.line(), m);
-        assertEquals(x.key(), e.key(), m);
-        if (!x.key().isEmpty()) {
-            assertTrue(m.contains(": " + x.key() + ": "), m);
-        }
-        assertTrue(e.column() > 0, m);
+    void reportsFileLineKeyAndWhatWasExpected(MalformedCase x) {
+        x.assertReportedBy(assertThrows(InputException.class, () -> loader.load(x.file())));
     }
 
     @Test
-    void coversAtLeastTenCases() throws IOException, URISyntaxException {
+    void coversAtLeastTenCases() {
         assertTrue(malformedFiles().count() >= 10);
     }
 
