@@ -19,7 +19,7 @@ import java.util.regex.Pattern;
  * <p>Supported keywords: {@code [IBIS Ver]}, {@code [Comment Char]}, {@code [File Name]},
  * {@code [File Rev]}, {@code [Date]}, {@code [Source]}, {@code [Notes]}, {@code [Disclaimer]},
  * {@code [Copyright]}, {@code [Component]}, {@code [Manufacturer]}, {@code [Package]},
- * {@code [Pin]}, {@code [Model]} (sub-parameters {@code Model_type}, {@code Polarity},
+ * {@code [Pin]}, {@code [Model Selector]}, {@code [Model]} (sub-parameters {@code Model_type}, {@code Polarity},
  * {@code Enable}, {@code Vinl}, {@code Vinh}, {@code Vmeas}, {@code Vref}, {@code Cref},
  * {@code Rref}, {@code C_comp}), {@code [Voltage Range]}, {@code [Pullup Reference]},
  * {@code [Pulldown Reference]}, {@code [POWER Clamp Reference]}, {@code [GND Clamp Reference]},
@@ -116,7 +116,7 @@ public final class IbisParser {
     }
 
     /** What the lines after the current keyword hold. */
-    private enum Section { NONE, TEXT, COMPONENT, PACKAGE, PIN, MODEL, RANGE, TABLE, RAMP, WAVEFORM, SKIP }
+    private enum Section { NONE, TEXT, COMPONENT, PACKAGE, PIN, MODEL, RANGE, TABLE, RAMP, WAVEFORM, SELECTOR, SKIP }
 
     /** The state of one read. */
     private static final class Reader {
@@ -124,6 +124,8 @@ public final class IbisParser {
         private final List<String> warnings = new ArrayList<>();
         private final List<IbisComponent> components = new ArrayList<>();
         private final Map<String, IbisModel> models = new LinkedHashMap<>();
+        private final Map<String, IbisModelSelector> selectors = new LinkedHashMap<>();
+        private SelectorDraft selector;
         private char commentChar = '|';
         private String version;
         private String fileName = "";
@@ -156,7 +158,13 @@ public final class IbisParser {
             if (!ended) {
                 warnings.add(file + ": no [End] keyword; the file may be cut short");
             }
-            return new IbisFile(file, version, fileName, components, models, warnings);
+            for (IbisModelSelector sel : selectors.values()) {
+                if (models.containsKey(sel.name())) {
+                    throw new IbisFormatException(file, sel.line(), "[Model Selector]", "`" + sel.name()
+                            + "` is also the name of a [Model]; expected a selector name distinct from every model name");
+                }
+            }
+            return new IbisFile(file, version, fileName, components, models, selectors, warnings);
         }
 
         private void line(String raw, int n) {
@@ -232,6 +240,15 @@ public final class IbisParser {
                     }
                     model = new ModelDraft(name, n);
                     section = Section.MODEL;
+                }
+                case "model selector" -> {
+                    closeModel();
+                    String name = requireArg(arg, n, "the selector name");
+                    if (selectors.containsKey(name)) {
+                        throw new IbisFormatException(file, n, kw, "selector `" + name + "` is defined twice; expected unique selector names");
+                    }
+                    selector = new SelectorDraft(name, n);
+                    section = Section.SELECTOR;
                 }
                 case "rising waveform", "falling waveform" -> {
                     requireModel(n);
@@ -321,6 +338,7 @@ public final class IbisParser {
                 case TABLE -> tableRow(table, line, n, "voltage");
                 case RAMP -> rampLine(line, n);
                 case WAVEFORM -> waveformLine(line, n);
+                case SELECTOR -> selectorLine(line, n);
                 default -> throw new IllegalStateException(section.name());
             }
         }
@@ -459,6 +477,16 @@ public final class IbisParser {
             return new double[] {dv, dt};
         }
 
+        private void selectorLine(String line, int n) {
+            String[] t = line.split("\\s+", 2);
+            for (IbisModelSelector.Entry e : selector.entries) {
+                if (e.model().equals(t[0])) {
+                    throw new IbisFormatException(file, n, keyword, "model `" + t[0] + "` is listed twice");
+                }
+            }
+            selector.entries.add(new IbisModelSelector.Entry(t[0], t.length > 1 ? t[1].strip() : ""));
+        }
+
         private void waveformLine(String line, int n) {
             if (Character.isLetter(line.charAt(0))) {
                 String[] t = tokens(line);
@@ -495,6 +523,13 @@ public final class IbisParser {
                     }
                     model.ramp = new IbisRamp(ramp.riseDv, ramp.riseDt, ramp.fallDv, ramp.fallDt, ramp.rLoad);
                     ramp = null;
+                }
+                case SELECTOR -> {
+                    if (selector.entries.isEmpty()) {
+                        throw new IbisFormatException(file, keywordLine, keyword, "expected at least one row `model_name description`");
+                    }
+                    selectors.put(selector.name, new IbisModelSelector(selector.name, selector.entries, selector.line));
+                    selector = null;
                 }
                 case WAVEFORM -> {
                     Double r = waveform.params.get("r_fixture");
@@ -555,8 +590,8 @@ public final class IbisParser {
             }
             boolean output = !(m.modelType.equalsIgnoreCase("Input") || m.modelType.equalsIgnoreCase("Terminator")
                     || m.modelType.equalsIgnoreCase("Input_ECL"));
-            if (output && m.ramp == null && !m.modelType.toLowerCase(Locale.ROOT).startsWith("series")) {
-                warnings.add(file + ":" + m.line + ": " + at + " of type " + m.modelType + " has no [Ramp]; it cannot drive");
+            if (output && m.ramp == null && m.rising.isEmpty() && m.falling.isEmpty() && !m.modelType.toLowerCase(Locale.ROOT).startsWith("series")) {
+                warnings.add(file + ":" + m.line + ": " + at + " of type " + m.modelType + " has no [Ramp] and no waveforms; it cannot drive");
             }
             models.put(m.name, new IbisModel(m.name, m.modelType, m.polarity == null ? "Non-Inverting" : m.polarity,
                     num(m, "vinl"), num(m, "vinh"), num(m, "vmeas"), num(m, "vref"), num(m, "cref"), num(m, "rref"), m.cComp,
@@ -651,6 +686,18 @@ public final class IbisParser {
             final List<IbisWaveform> falling = new ArrayList<>();
 
             ModelDraft(String name, int line) {
+                this.name = name;
+                this.line = line;
+            }
+        }
+
+        /** A [Model Selector] being read. */
+        private static final class SelectorDraft {
+            final String name;
+            final int line;
+            final List<IbisModelSelector.Entry> entries = new ArrayList<>();
+
+            SelectorDraft(String name, int line) {
                 this.name = name;
                 this.line = line;
             }

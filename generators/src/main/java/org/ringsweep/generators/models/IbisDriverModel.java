@@ -18,7 +18,6 @@ import org.ringsweep.api.net.Stimulus;
 import org.ringsweep.generators.ibis.IbisCorner;
 import org.ringsweep.generators.ibis.IbisModel;
 import org.ringsweep.generators.ibis.IbisRamp;
-import org.ringsweep.generators.ibis.IbisTable;
 
 /**
  * The built-in {@code ibis} driver: a behavioural buffer built from an IBIS model's tables
@@ -31,27 +30,25 @@ import org.ringsweep.generators.ibis.IbisTable;
  * file ({@code [Pullup Reference]} etc., else {@code [Voltage Range]} and 0 V) in the chosen
  * column, each as the model's own DC source: the buffer does not draw from the net's rails.
  *
- * <p>Switching: {@code kd = 1 − ku}; across each edge {@code ku} moves between 0 and 1 over the
- * 0–100 % time of the equivalent linear ramp, {@code dt/0.6} of {@code [Ramp]}
- * (lines-and-terminations.md §6). Its shape is solved, at 40 steps per edge, so that the buffer
- * driving {@code [Ramp]}'s {@code R_load} (to GND for the rising edge, to the pull-up reference
- * for the falling edge — common practice; the reference leaves the fixture rail unverified),
- * with {@code C_comp}, follows that straight ramp between its two DC levels: at each instant
- * KCL at the pad is linear in {@code ku}. The buffer then reproduces {@code [Ramp]}'s 20–80 %
- * slew into that load; into other loads the shape follows from the tables.
- * {@code [Rising Waveform]}/{@code [Falling Waveform]} tables are read but not used yet.
- * Package parasitics ({@code [Package]}, {@code [Pin]} R/L/C) are not added: model them as parts.
- * ECL model types (whose pull-down is Vcc-relative) are rejected for now.
+ * <p>Switching: the pull-up and pull-down factors {@code ku(t)}, {@code kd(t)} come from the
+ * model's {@code [Rising Waveform]}/{@code [Falling Waveform]} tables when it has usable ones
+ * (two waveforms per edge: the two-equation method; one: kd = 1 − ku), else from {@code [Ramp]};
+ * see {@link IbisSwitching}. Each edge's coefficients start at the scheduled edge time and run
+ * until they settle or the next edge starts.
+ *
+ * <p>Package: when the component is known ({@code component}), the die pad (tables, clamps,
+ * {@code C_comp}) sits behind the package, {@code R_pkg} and {@code L_pkg} in series to the pin
+ * and {@code C_pkg} from the pin to GND, each from the pin's {@code [Pin]} row where given, else
+ * from {@code [Package]} in the chosen column ({@link IbisPackage}); {@code package: false} puts
+ * the die pad at the pin. ECL model types (whose pull-down is Vcc-relative) are rejected for now.
  *
  * <p>Parameters: {@code file} (relative to the net file), {@code ibis_model} or
- * {@code component} + {@code ibis_pin}, {@code ibis_corner} (typ, min, max; default typ).
+ * {@code component} + {@code ibis_pin}, {@code ibis_select} (an entry of a {@code [Model Selector]}),
+ * {@code package} (true or false; default true), {@code ibis_corner} (typ, min, max; default typ).
  */
 public final class IbisDriverModel implements DriverModel {
     /** The shared instance. */
     public static final IbisDriverModel INSTANCE = new IbisDriverModel();
-    /** Steps of the solved switching function per edge. */
-    static final int STEPS = 40;
-
     private IbisDriverModel() {
     }
 
@@ -67,7 +64,7 @@ public final class IbisDriverModel implements DriverModel {
 
     @Override
     public String description() {
-        return "IBIS buffer: pull-up/pull-down/clamp V-I tables, C_comp, switched over the [Ramp] time";
+        return "IBIS buffer: pull-up/pull-down/clamp V-I tables, C_comp, package R-L-C, switched by its waveforms or [Ramp]";
     }
 
     @Override
@@ -92,8 +89,9 @@ public final class IbisDriverModel implements DriverModel {
             throw new ModelParameterException(driver.parameters().has("ibis_model") ? "ibis_model" : "ibis_pin", "IBIS model `"
                     + m.name() + "` is of type " + m.modelType() + "; ECL drivers are not supported yet; expected a CMOS-style output or I/O model");
         }
-        if (m.ramp() == null) {
-            throw new ModelParameterException("file", "IBIS model `" + m.name() + "` has no [Ramp]; expected one to time its edges");
+        if (m.ramp() == null && (m.rising().isEmpty() || m.falling().isEmpty())) {
+            throw new ModelParameterException("file", "IBIS model `" + m.name()
+                    + "` has no [Ramp]; expected one, or both [Rising Waveform] and [Falling Waveform], to time its edges");
         }
         if (m.pulldown() == null && m.pullup() == null) {
             throw new ModelParameterException("file", "IBIS model `" + m.name() + "` has neither [Pullup] nor [Pulldown]; expected its output tables");
@@ -120,7 +118,8 @@ public final class IbisDriverModel implements DriverModel {
     @Override
     public double fullTransition(Driver driver, Stimulus.Edge edge, NetRails rails) {
         IbisSelection s = driving(driver);
-        return s.model().ramp().fullTime(edge == Stimulus.Edge.RISE, s.corner());
+        // Warnings are given once, at elaboration.
+        return IbisSwitching.of(new IbisBuffer(s.model(), s.corner()), edge == Stimulus.Edge.RISE, w -> { }).fullTime();
     }
 
     @Override
@@ -137,7 +136,8 @@ public final class IbisDriverModel implements DriverModel {
         if (m.pullup() != null && m.pullup().valueAt(c, v) < 0) {
             rs.add(-v / m.pullup().valueAt(c, v));
         }
-        return rs.isEmpty() ? IbisRamp.DEFAULT_R_LOAD : rs.stream().mapToDouble(Double::doubleValue).average().orElseThrow();
+        double stage = rs.isEmpty() ? IbisRamp.DEFAULT_R_LOAD : rs.stream().mapToDouble(Double::doubleValue).average().orElseThrow();
+        return stage + s.packageValues().map(IbisPackage::ohms).orElse(0.0);
     }
 
     @Override
@@ -147,37 +147,30 @@ public final class IbisDriverModel implements DriverModel {
         s.file().warnings().forEach(ctx::warn);
         IbisModel m = s.model();
         IbisCorner c = s.corner();
-        Buffer b = new Buffer(m, c);
-        String pad = ctx.pinNode();
-        References refs = new References(ctx, driver.pin());
+        IbisBuffer b = new IbisBuffer(m, c);
+        String pin = driver.pin();
+        String pad = IbisPackage.padNode(s, ctx, pin);
+        References refs = new References(ctx, pin);
         String vcc = refs.node("vpu", b.vcc);
         String vgnd = refs.node("vpd", b.vgnd);
-        double[][] k = switching(b, ctx.edges());
-        double[] times = k[0];
-        double[] ku = k[1];
-        double[] kd = new double[ku.length];
-        for (int i = 0; i < ku.length; i++) {
-            kd[i] = 1 - ku[i];
-        }
-        String pin = driver.pin();
+        double[][] k = switching(b, ctx.edges(), ctx::warn);
         if (m.pulldown() != null) {
             ctx.add(new Primitive.TableCurrent(ctx.newName("ipd_" + pin), pad, vgnd, pad, vgnd, m.pulldown().x(),
-                    m.pulldown().column(c), times, kd));
+                    m.pulldown().column(c), k[0], k[2]));
         }
         if (m.pullup() != null) {
             ctx.add(new Primitive.TableCurrent(ctx.newName("ipu_" + pin), pad, vcc, vcc, pad, m.pullup().x(),
-                    m.pullup().column(c), times, ku));
+                    m.pullup().column(c), k[0], k[1]));
         }
-        clamps(m, c, ctx, refs, pin);
+        clamps(m, c, ctx, refs, pin, pad);
         double cComp = m.cComp().get(c);
         if (cComp > 0) {
             ctx.add(new Primitive.Capacitor(ctx.newName("ccomp_" + pin), pad, ctx.groundNode(), cComp));
         }
     }
 
-    /** Adds the clamp tables and nothing else (shared with the receiver). */
-    static void clamps(IbisModel m, IbisCorner c, ElaborationContext ctx, References refs, String pin) {
-        String pad = ctx.pinNode();
+    /** Adds the clamp tables at the die pad and nothing else (shared with the receiver). */
+    static void clamps(IbisModel m, IbisCorner c, ElaborationContext ctx, References refs, String pin, String pad) {
         if (m.gndClamp() != null) {
             String ref = refs.node("vgc", m.gndClampReference(c));
             ctx.add(new Primitive.TableCurrent(ctx.newName("igc_" + pin), pad, ref, pad, ref, m.gndClamp().x(),
@@ -191,118 +184,52 @@ public final class IbisDriverModel implements DriverModel {
     }
 
     /**
-     * The pull-up factor ku over time: {0: times, 1: ku}. It starts at the level before the
-     * first edge and, for each edge, follows the solved shape (see the class comment).
+     * The switching factors over time: {0: times, 1: ku, 2: kd}. They start at the first edge's
+     * starting values and follow each edge's coefficients from its start, cut short where the
+     * next edge begins (with a warning when they had not settled by then).
      */
-    static double[][] switching(Buffer b, List<ScheduledEdge> edges) {
+    static double[][] switching(IbisBuffer b, List<ScheduledEdge> edges, java.util.function.Consumer<String> warn) {
         List<double[]> pts = new ArrayList<>();
-        boolean startHigh = !edges.isEmpty() && edges.get(0).direction() == Stimulus.Edge.FALL;
-        pts.add(new double[] {0, startHigh ? 1 : 0});
-        for (ScheduledEdge e : edges) {
+        IbisSwitching rise = null;
+        IbisSwitching fall = null;
+        for (int j = 0; j < edges.size(); j++) {
+            ScheduledEdge e = edges.get(j);
             boolean rising = e.direction() == Stimulus.Edge.RISE;
-            double[] shape = b.shape(rising);
-            double full = b.ramp.fullTime(rising, b.corner);
-            for (int i = 0; i <= STEPS; i++) {
-                double t = e.start() + full * i / STEPS;
-                if (t > pts.get(pts.size() - 1)[0]) {
-                    pts.add(new double[] {t, rising ? shape[i] : 1 - shape[i]});
+            if (rising && rise == null) {
+                rise = IbisSwitching.of(b, true, warn);
+            } else if (!rising && fall == null) {
+                fall = IbisSwitching.of(b, false, warn);
+            }
+            IbisSwitching k = rising ? rise : fall;
+            double[] t = k.times();
+            double[] ku = k.ku();
+            double[] kd = k.kd();
+            if (pts.isEmpty()) {
+                pts.add(new double[] {0, ku[0], kd[0]});
+            }
+            double next = j + 1 < edges.size() ? edges.get(j + 1).start() : Double.POSITIVE_INFINITY;
+            for (int i = 0; i < t.length; i++) {
+                double at = e.start() + t[i];
+                if (at >= next) {
+                    double settled = Math.max(Math.abs(ku[i] - ku[t.length - 1]), Math.abs(kd[i] - kd[t.length - 1]));
+                    if (settled > 0.02) {
+                        warn.accept("IBIS model `" + b.model.name() + "`: the next edge starts `" + (next - e.start())
+                                + "` s after this one, before the switching of this edge has settled; lengthen `stimulus.settle`");
+                    }
+                    break;
+                }
+                if (at > pts.get(pts.size() - 1)[0]) {
+                    pts.add(new double[] {at, ku[i], kd[i]});
                 }
             }
         }
-        double[][] out = new double[2][pts.size()];
+        double[][] out = new double[3][pts.size()];
         for (int i = 0; i < pts.size(); i++) {
-            out[0][i] = pts.get(i)[0];
-            out[1][i] = pts.get(i)[1];
+            for (int r = 0; r < 3; r++) {
+                out[r][i] = pts.get(i)[r];
+            }
         }
         return out;
-    }
-
-    /** The tables of one model in one column, as functions of the pad voltage. */
-    static final class Buffer {
-        final IbisModel model;
-        final IbisCorner corner;
-        final IbisRamp ramp;
-        final double vcc;
-        final double vgnd;
-        final double cComp;
-
-        Buffer(IbisModel model, IbisCorner corner) {
-            this.model = model;
-            this.corner = corner;
-            this.ramp = model.ramp();
-            this.vcc = model.pullupReference(corner);
-            this.vgnd = model.pulldownReference(corner);
-            this.cComp = model.cComp().get(corner);
-        }
-
-        /** Pull-down current into the pin at pad voltage v (A). */
-        double pulldown(double v) {
-            return model.pulldown() == null ? 0 : model.pulldown().valueAt(corner, v - vgnd);
-        }
-
-        /** Pull-up current into the pin at pad voltage v (A). */
-        double pullup(double v) {
-            return model.pullup() == null ? 0 : model.pullup().valueAt(corner, vcc - v);
-        }
-
-        /** Clamp currents into the pin at pad voltage v (A). */
-        double clamps(double v) {
-            double i = 0;
-            IbisTable gc = model.gndClamp();
-            IbisTable pc = model.powerClamp();
-            if (gc != null) {
-                i += gc.valueAt(corner, v - model.gndClampReference(corner));
-            }
-            if (pc != null) {
-                i += pc.valueAt(corner, model.powerClampReference(corner) - v);
-            }
-            return i;
-        }
-
-        /**
-         * The solved factor of the stage turning on (pull-up when rising, pull-down when
-         * falling), at {@link #STEPS} + 1 instants across the full ramp; 0 at the start and 1 at
-         * the end.
-         */
-        double[] shape(boolean rising) {
-            double rLoad = ramp.rLoad();
-            double vFix = rising ? 0 : vcc;
-            double vStart = level(!rising, rLoad, vFix);
-            double vEnd = level(rising, rLoad, vFix);
-            double full = ramp.fullTime(rising, corner);
-            double slope = (vEnd - vStart) / full;
-            double[] k = new double[STEPS + 1];
-            for (int i = 0; i <= STEPS; i++) {
-                double v = vStart + (vEnd - vStart) * i / STEPS;
-                double off = rising ? pulldown(v) : pullup(v);
-                double on = rising ? pullup(v) : pulldown(v);
-                double load = (v - vFix) / rLoad + cComp * slope;
-                double denominator = on - off;
-                double ki = Math.abs(denominator) > 1e-12 ? -(off + clamps(v) + load) / denominator : (double) i / STEPS;
-                k[i] = Math.max(0, Math.min(1, ki));
-            }
-            k[0] = 0;
-            k[STEPS] = 1;
-            return k;
-        }
-
-        /** The DC pad voltage with the pull-up on ({@code high}) or the pull-down on, into rLoad to vFix. */
-        double level(boolean high, double rLoad, double vFix) {
-            // Pad current into the buffer plus the load current rises with the pad voltage: bisect.
-            double span = Math.max(1, vcc - vgnd);
-            double lo = Math.min(vgnd, vFix) - 2 * span;
-            double hi = Math.max(vcc, vFix) + 2 * span;
-            for (int i = 0; i < 200; i++) {
-                double mid = (lo + hi) / 2;
-                double f = (high ? pullup(mid) : pulldown(mid)) + clamps(mid) + (mid - vFix) / rLoad;
-                if (f > 0) {
-                    hi = mid;
-                } else {
-                    lo = mid;
-                }
-            }
-            return (lo + hi) / 2;
-        }
     }
 
     /** The model's own reference sources, one per distinct voltage; 0 V is ground. */

@@ -18,8 +18,11 @@ import org.ringsweep.generators.ibis.IbisModel;
  * The built-in {@code ibis} receiver: an IBIS model's input side — its {@code [GND Clamp]} and
  * {@code [POWER Clamp]} tables as {@link Primitive.TableCurrent}s (unscaled, referenced to the
  * model's own clamp reference sources, see {@link IbisDriverModel}) and {@code C_comp} from the
- * pin to GND. An I/O model used here is an input with its output stage off. The thresholds are
- * {@code vih}/{@code vil} when the net gives them, else the model's {@code Vinh}/{@code Vinl}.
+ * die pad to GND; the die pad sits behind the package when the component is known (see
+ * {@link IbisPackage}; {@code package: false} puts it at the pin). The waveform is measured at
+ * the pin, as for every receiver. An I/O model used here is an input with its output stage off.
+ * The thresholds are {@code vih}/{@code vil} when the net gives them, else the model's
+ * {@code Vinh}/{@code Vinl}.
  */
 public final class IbisReceiverModel implements ReceiverModel {
     /** The shared instance. */
@@ -40,7 +43,7 @@ public final class IbisReceiverModel implements ReceiverModel {
 
     @Override
     public String description() {
-        return "IBIS input: clamp V-I tables and C_comp; thresholds from Vinh/Vinl unless vih/vil are given";
+        return "IBIS input: clamp V-I tables, C_comp and package R-L-C; thresholds from Vinh/Vinl unless vih/vil are given";
     }
 
     @Override
@@ -81,7 +84,7 @@ public final class IbisReceiverModel implements ReceiverModel {
     @Override
     public double inputCapacitance(Receiver receiver) {
         IbisSelection s = IbisSelection.of(receiver);
-        return s.model().cComp().get(s.corner());
+        return s.model().cComp().get(s.corner()) + s.packageValues().map(IbisPackage::farads).orElse(0.0);
     }
 
     @Override
@@ -91,10 +94,11 @@ public final class IbisReceiverModel implements ReceiverModel {
         IbisModel m = s.model();
         IbisCorner c = s.corner();
         String pin = receiver.pin();
-        IbisDriverModel.clamps(m, c, ctx, new IbisDriverModel.References(ctx, pin), pin);
+        String pad = IbisPackage.padNode(s, ctx, pin);
+        IbisDriverModel.clamps(m, c, ctx, new IbisDriverModel.References(ctx, pin), pin, pad);
         double cComp = m.cComp().get(c);
         if (cComp > 0) {
-            ctx.add(new Primitive.Capacitor(ctx.newName("ccomp_" + pin), ctx.pinNode(), ctx.groundNode(), cComp));
+            ctx.add(new Primitive.Capacitor(ctx.newName("ccomp_" + pin), pad, ctx.groundNode(), cComp));
         }
     }
 }

@@ -193,11 +193,40 @@ class IbisParserTests {
         IbisFile f = IbisParser.parse(text, "t.ibs");
         List<String> w = f.warnings();
         assertTrue(w.stream().anyMatch(s -> s.contains("t.ibs:6") && s.contains("[Diff Pin]")), w.toString());
-        assertTrue(w.stream().anyMatch(s -> s.contains("t.ibs:8") && s.contains("[Model Selector]")), w.toString());
+        assertFalse(w.stream().anyMatch(s -> s.contains("[Model Selector]")), "the selector is read now: " + w);
+        assertEquals(List.of("m1"), f.selector("sel").orElseThrow().modelNames());
         assertTrue(w.stream().anyMatch(s -> s.contains("t.ibs:13") && s.contains("Vinh_ac")), w.toString());
         assertTrue(w.stream().anyMatch(s -> s.contains("t.ibs:15") && s.contains("[Model Spec]")), w.toString());
         assertTrue(w.stream().anyMatch(s -> s.contains("no [Ramp]")), w.toString());
         assertEquals(1, f.component("C1").orElseThrow().pins().size(), "the [Diff Pin] row is not read as a pin");
+    }
+
+    @Test
+    void aModelSelectorListsItsEntriesInFileOrderWithTheirDescriptions() {
+        String text = withModel("[Model Selector] io_sel", "| model_name  description", "m1  Full drive, the default",
+                "m2  Half drive", "[Model] m2", "Model_type Output", "C_comp 2p 1p 3p", "[Voltage Range] 3.3 3.0 3.6");
+        IbisModelSelector sel = IbisParser.parse(text, "t.ibs").selector("io_sel").orElseThrow();
+        // the text above: entries m1 then m2, the first the default (IBIS [Model Selector] rule)
+        assertEquals(List.of("m1", "m2"), sel.modelNames());
+        assertEquals("Full drive, the default", sel.entries().get(0).description());
+        assertEquals(6, sel.line());
+    }
+
+    @Test
+    void aBadModelSelectorIsAnErrorNamingFileLineAndKeyword() {
+        IbisFormatException empty = assertThrows(IbisFormatException.class,
+                () -> IbisParser.parse(withModel("[Model Selector] s"), "t.ibs"));
+        assertEquals("t.ibs", empty.file());
+        assertEquals(6, empty.line());
+        assertEquals("[Model Selector]", empty.keyword());
+        assertTrue(empty.getMessage().contains("expected at least one row"), empty.getMessage());
+        IbisFormatException twice = assertThrows(IbisFormatException.class,
+                () -> IbisParser.parse(withModel("[Model Selector] s", "m1 a", "m1 b"), "t.ibs"));
+        assertEquals(8, twice.line());
+        assertTrue(twice.getMessage().contains("`m1` is listed twice"), twice.getMessage());
+        IbisFormatException clash = assertThrows(IbisFormatException.class,
+                () -> IbisParser.parse(withModel("[Model Selector] m1", "m1 a"), "t.ibs"));
+        assertTrue(clash.getMessage().startsWith("t.ibs:6: [Model Selector]: `m1` is also the name of a [Model]"), clash.getMessage());
     }
 
     @Test
