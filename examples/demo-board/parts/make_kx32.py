@@ -6,6 +6,14 @@ I = Isat*tanh(V/(Isat*R)) (linear near 0 V, saturating at Isat) and clamp diodes
 with series resistance, V = n*Vt*ln(1 + I/Is) + I*Rs. [Ramp] is computed from the tables
 themselves: the 20-80 % step of the DC swing into R_load = 50 ohm (to GND for the rising edge,
 to Vcc for the falling edge) over an invented 20-80 % time, so the file is self-consistent.
+
+io33_half is the same pin at half drive strength, chosen through the [Model Selector] io33_drive.
+It has [Rising Waveform] and [Falling Waveform] tables into 50 ohm to GND and to Vcc: the pad
+voltage integrated (RK4, 1 ps) from KCL at the die pad, C_comp dV/dt = -(ku*Ipu + kd*Ipd +
+clamps + (V - V_fixture)/R_fixture), with the file's own (rounded, piecewise-linear) tables and
+invented switching coefficients (smoothsteps, the stage turning off faster than the other turns
+on). Its [Ramp] is the 20-80 % step and time of those waveforms (rising into the GND fixture,
+falling into the Vcc fixture).
 """
 import math
 
@@ -20,6 +28,13 @@ VT = 0.025852
 DT_R = {"typ": 1.00e-9, "min": 1.40e-9, "max": 0.70e-9}
 DT_F = {"typ": 0.90e-9, "min": 1.25e-9, "max": 0.65e-9}
 R_LOAD = 50.0
+# io33_half: half drive strength
+PD_HALF = {"typ": (40.0, 0.040), "min": (56.0, 0.0275), "max": (30.0, 0.055)}
+PU_HALF = {"typ": (50.0, 0.0325), "min": (70.0, 0.0225), "max": (36.0, 0.045)}
+C_COMP = {"typ": 3.0e-12, "min": 2.6e-12, "max": 3.5e-12}
+T_ON = {"typ": 1.6e-9, "min": 2.2e-9, "max": 1.1e-9}   # time for the stage turning on
+LEAD = 0.3e-9                                         # quiet lead-in of the waveform tables
+ROWS, ROW_DT = 100, 40e-12
 
 
 def stage(v, r, isat):
@@ -41,12 +56,12 @@ def diode(vd, c):
     return (lo + hi) / 2
 
 
-def pulldown(v, c):   # Vpad - Vgnd -> current into the pin
-    return stage(v, *PD[c])
+def pulldown(v, c, pd=PD):   # Vpad - Vgnd -> current into the pin
+    return stage(v, *pd[c])
 
 
-def pullup(v, c):     # Vcc - Vpad -> current into the pin (negative: it sources)
-    return -stage(v, *PU[c])
+def pullup(v, c, pu=PU):     # Vcc - Vpad -> current into the pin (negative: it sources)
+    return -stage(v, *pu[c])
 
 
 def gnd_clamp(v, c):  # Vpad - Vgnd -> current into the pin: the diode conducts below GND
@@ -105,6 +120,96 @@ def clamp_grid():
     return [-3.3, -2.5, -2.0, -1.5, -1.2, -1.0, -0.9, -0.8, -0.7, -0.6, -0.5, -0.4, -0.2, 0.0, 3.3]
 
 
+def as_read(f, vs, c):
+    """The table f as a reader sees it: rounded as printed, linear between rows, held outside."""
+    ys = [float(fmt(f(v, c))) for v in vs]
+
+    def g(x):
+        if x <= vs[0]:
+            return ys[0]
+        for i in range(1, len(vs)):
+            if x <= vs[i]:
+                return ys[i - 1] + (ys[i] - ys[i - 1]) * (x - vs[i - 1]) / (vs[i] - vs[i - 1])
+        return ys[-1]
+    return g
+
+
+def smooth(x):
+    x = min(1.0, max(0.0, x))
+    return x * x * (3 - 2 * x)
+
+
+def waveform(c, rising, v_fix):
+    """Pad voltage of io33_half into 50 ohm to v_fix at the table rows, and (t, v) at 1 ps."""
+    vcc = VCC[c]
+    ipd = as_read(lambda v, k: pulldown(v, k, PD_HALF), grid(), c)
+    ipu = as_read(lambda v, k: pullup(v, k, PU_HALF), grid(), c)
+    igc = as_read(gnd_clamp, clamp_grid(), c)
+    ipc = as_read(power_clamp, clamp_grid(), c)
+
+    def k(t):
+        on = smooth((t - LEAD) / T_ON[c])
+        off = 1 - smooth((t - LEAD) / (0.6 * T_ON[c]))
+        return (on, off) if rising else (off, on)
+
+    def current(t, v):
+        ku, kd = k(t)
+        return ku * ipu(vcc - v) + kd * ipd(v) + igc(v) + ipc(vcc - v) + (v - v_fix) / R_LOAD
+
+    ku0, kd0 = k(0.0)
+    v = solve(lambda x: ku0 * ipu(vcc - x) + kd0 * ipd(x) + igc(x) + ipc(vcc - x) + (x - v_fix) / R_LOAD, -1.0, vcc + 1.0)
+    h = 1e-12
+    cc = C_COMP[c]
+    steps = int(round((ROWS - 1) * ROW_DT / h))
+    fine = [(0.0, v)]
+    for i in range(steps):
+        t = i * h
+        f = lambda tt, vv: -current(tt, vv) / cc
+        a = f(t, v)
+        b = f(t + h / 2, v + h / 2 * a)
+        d = f(t + h / 2, v + h / 2 * b)
+        e = f(t + h, v + h * d)
+        v += h / 6 * (a + 2 * b + 2 * d + e)
+        fine.append(((i + 1) * h, v))
+    stride = int(round(ROW_DT / h))
+    return [fine[i * stride][1] for i in range(ROWS)], fine
+
+
+def ramp_of(fine):
+    """20-80 % step and time of a waveform given at 1 ps."""
+    v0, v1 = fine[0][1], fine[-1][1]
+
+    def cross(level):
+        for (ta, va), (tb, vb) in zip(fine, fine[1:]):
+            if (va - level) * (vb - level) <= 0 and va != vb:
+                return ta + (tb - ta) * (level - va) / (vb - va)
+        raise ValueError("no crossing")
+    t20 = cross(v0 + 0.2 * (v1 - v0))
+    t80 = cross(v0 + 0.8 * (v1 - v0))
+    return 0.6 * abs(v1 - v0), t80 - t20
+
+
+def waveform_tables(lines):
+    ramps = {}
+    for rising, name in ((True, "Rising Waveform"), (False, "Falling Waveform")):
+        for to_vcc in (False, True):
+            cols = {}
+            for c in CORNERS:
+                rows, fine = waveform(c, rising, VCC[c] if to_vcc else 0.0)
+                cols[c] = rows
+                if to_vcc != rising:
+                    ramps[(rising, c)] = ramp_of(fine)
+            lines += ["[%s]" % name, "R_fixture = 50"]
+            if to_vcc:
+                lines += ["V_fixture = 3.3", "V_fixture_min = 3.0", "V_fixture_max = 3.6"]
+            else:
+                lines += ["V_fixture = 0.0"]
+            lines += ["| time      V(typ)      V(min)      V(max)"]
+            for i in range(ROWS):
+                lines.append("%.3fn   %.5f   %.5f   %.5f" % (i * ROW_DT * 1e9, cols["typ"][i], cols["min"][i], cols["max"][i]))
+    return ramps
+
+
 def model_common(lines):
     lines += ["[Voltage Range]      3.3V     3.0V     3.6V",
               "[Temperature Range]  25.0     100.0    0.0"]
@@ -131,12 +236,17 @@ def main():
             "L_pkg       3.0nH    2.5nH    3.8nH",
             "C_pkg       0.6pF    0.5pF    0.8pF",
             "[Pin]  signal_name  model_name  R_pin  L_pin  C_pin",
-            "1      PA0          io33",
-            "2      PA1          io33        0.30   3.5nH  0.7pF",
+            "1      PA0          io33_drive",
+            "2      PA1          io33_drive  0.30   3.5nH  0.7pF",
             "3      PB0          in33",
             "4      VDD          POWER",
             "5      VSS          GND",
             "6      NC1          NC",
+            "|",
+            "[Model Selector] io33_drive",
+            "| model_name  description",
+            "io33          Full drive strength (default)",
+            "io33_half     Half drive strength, slower edges",
             "|"]
     out += ["[Model]         io33",
             "Model_type      I/O",
@@ -172,6 +282,28 @@ def main():
     model_common(out)
     out += table("GND Clamp", gnd_clamp, clamp_grid())
     out += table("POWER Clamp", power_clamp, clamp_grid())
+    out += ["|", "[Model]         io33_half",
+            "Model_type      I/O",
+            "Polarity        Non-Inverting",
+            "Enable          Active-High",
+            "Vinl = 0.8V",
+            "Vinh = 2.0V",
+            "Vmeas = 1.65V",
+            "|            typ      min      max",
+            "C_comp       3.0pF    2.6pF    3.5pF"]
+    model_common(out)
+    out += table("Pulldown", lambda v, c: pulldown(v, c, PD_HALF), grid())
+    out += table("Pullup", lambda v, c: pullup(v, c, PU_HALF), grid())
+    out += table("GND Clamp", gnd_clamp, clamp_grid())
+    out += table("POWER Clamp", power_clamp, clamp_grid())
+    waves = []
+    ramps = waveform_tables(waves)
+    out += ["[Ramp]", "| variable   typ              min              max"]
+    for edge, rising in (("r", True), ("f", False)):
+        cells = ["%.3f/%.3fn" % (ramps[(rising, c)][0], ramps[(rising, c)][1] * 1e9) for c in CORNERS]
+        out.append("dV/dt_%s     %s" % (edge, "   ".join(cells)))
+    out += ["R_load = 50"]
+    out += waves
     out += ["|", "[End]"]
     with open("kx32.ibs", "w") as f:
         f.write("\n".join(out) + "\n")

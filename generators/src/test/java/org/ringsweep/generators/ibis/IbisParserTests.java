@@ -42,7 +42,7 @@ class IbisParserTests {
         assertEquals(6, kx.pins().size());
         IbisPin pa1 = kx.pin("2").orElseThrow();
         assertEquals("PA1", pa1.signal());
-        assertEquals("io33", pa1.model());
+        assertEquals("io33_drive", pa1.model()); // the [Model Selector] of kx32.ibs
         assertEquals(3.5e-9, pa1.lPin(), 1e-21);
         assertTrue(Double.isNaN(kx.pin("1").orElseThrow().rPin()), "a pin row without R_pin L_pin C_pin");
         assertTrue(f.warnings().isEmpty(), f.warnings().toString());

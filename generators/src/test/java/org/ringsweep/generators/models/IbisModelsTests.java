@@ -183,6 +183,41 @@ class IbisModelsTests {
     }
 
     @Test
+    void theHalfDriveModelIsSwitchedByItsWaveformsAndKeepsItsRampSlewIntoRload(@TempDir Path dir) throws Exception {
+        IbisModel half = IbisParser.parse(Path.of("..", "examples", "demo-board", "parts", "kx32.ibs"), "kx32.ibs")
+                .model("io33_half").orElseThrow();
+        for (IbisCorner c : IbisCorner.values()) {
+            List<String> warnings = new ArrayList<>();
+            assertTrue(IbisSwitching.of(new IbisBuffer(half, c), true, warnings::add).fromTable(), "waveforms used");
+            assertTrue(warnings.isEmpty(), warnings.toString());
+        }
+        // through the selector: kx32.ibs pin 1 uses [Model Selector] io33_drive
+        Driver d = new Driver("U1.1", "ibis", params("file", FILE, "component", "KX32", "ibis_pin", "1", "ibis_select", "io33_half",
+                "package", new org.ringsweep.api.net.Value.Flag(false)), at(4));
+        for (boolean rising : new boolean[] {true, false}) {
+            double vcc = half.voltageRange().get(IbisCorner.TYP);
+            Net net = loaded(d, 50, rising ? "GND" : "VCC", List.of(rising ? Stimulus.Edge.RISE : Stimulus.Edge.FALL)).build();
+            Elaboration e = new Elaborator().elaborate(net, "typ");
+            String node = e.driverNode();
+            // its own DC levels into R_load 50 Ω (GND when rising, Vcc when falling): the last rows of the waveforms
+            double vStart = rising ? 0 : vcc;
+            double vEnd = rising ? half.rising().get(0).table().valueAt(IbisCorner.TYP, 1)
+                    : half.falling().get(1).table().valueAt(IbisCorner.TYP, 1);
+            double v20 = vStart + 0.2 * (vEnd - vStart);
+            double v80 = vStart + 0.8 * (vEnd - vStart);
+            String w = rising ? "rise" : "fall";
+            Map<String, Double> m = run(e, dir, "meas tran t2080 trig v(" + node + ") val=" + v20 + " " + w + "=1 targ v(" + node
+                    + ") val=" + v80 + " " + w + "=1");
+            // [Ramp] of io33_half states the 20–80 % time of those same waveforms (lines-and-terminations.md §6)
+            double expected = half.ramp().riseDt().typ();
+            if (!rising) {
+                expected = half.ramp().fallDt().typ();
+            }
+            assertEquals(expected, m.get("t2080"), 0.02 * expected, w + " 20-80 % time");
+        }
+    }
+
+    @Test
     void clampsConductAsTheirTablesSayBeyondEitherRail(@TempDir Path dir) throws Exception {
         // A stiff source (10 Ω) forces the pad of the in33 input 1.2 V beyond each rail.
         double rOut = 10;
