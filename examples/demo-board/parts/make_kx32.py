@@ -215,6 +215,24 @@ def model_common(lines):
               "[Temperature Range]  25.0     100.0    0.0"]
 
 
+def output_model(lines, name, pd, pu, timing_load):
+    """The [Model] header, sub-parameters and V-I tables of an I/O buffer with these stages."""
+    lines += ["[Model]         %-s" % name,
+              "Model_type      I/O",
+              "Polarity        Non-Inverting",
+              "Enable          Active-High",
+              "Vinl = 0.8V",
+              "Vinh = 2.0V",
+              "Vmeas = 1.65V"] + timing_load + [
+              "|            typ      min      max",
+              "C_comp       3.0pF    2.6pF    3.5pF"]
+    model_common(lines)
+    lines += table("Pulldown", lambda v, c: pulldown(v, c, pd), grid())
+    lines += table("Pullup", lambda v, c: pullup(v, c, pu), grid())
+    lines += table("GND Clamp", gnd_clamp, clamp_grid())
+    lines += table("POWER Clamp", power_clamp, clamp_grid())
+
+
 def main():
     out = []
     out += ["[IBIS Ver]      3.2",
@@ -248,23 +266,7 @@ def main():
             "io33          Full drive strength (default)",
             "io33_half     Half drive strength, slower edges",
             "|"]
-    out += ["[Model]         io33",
-            "Model_type      I/O",
-            "Polarity        Non-Inverting",
-            "Enable          Active-High",
-            "Vinl = 0.8V",
-            "Vinh = 2.0V",
-            "Vmeas = 1.65V",
-            "Cref = 0pF",
-            "Rref = 50",
-            "Vref = 0",
-            "|            typ      min      max",
-            "C_comp       3.0pF    2.6pF    3.5pF"]
-    model_common(out)
-    out += table("Pulldown", pulldown, grid())
-    out += table("Pullup", pullup, grid())
-    out += table("GND Clamp", gnd_clamp, clamp_grid())
-    out += table("POWER Clamp", power_clamp, clamp_grid())
+    output_model(out, "io33", PD, PU, ["Cref = 0pF", "Rref = 50", "Vref = 0"])
     out += ["[Ramp]", "| variable   typ              min              max"]
     for edge, dts in (("r", DT_R), ("f", DT_F)):
         cells = []
@@ -282,20 +284,8 @@ def main():
     model_common(out)
     out += table("GND Clamp", gnd_clamp, clamp_grid())
     out += table("POWER Clamp", power_clamp, clamp_grid())
-    out += ["|", "[Model]         io33_half",
-            "Model_type      I/O",
-            "Polarity        Non-Inverting",
-            "Enable          Active-High",
-            "Vinl = 0.8V",
-            "Vinh = 2.0V",
-            "Vmeas = 1.65V",
-            "|            typ      min      max",
-            "C_comp       3.0pF    2.6pF    3.5pF"]
-    model_common(out)
-    out += table("Pulldown", lambda v, c: pulldown(v, c, PD_HALF), grid())
-    out += table("Pullup", lambda v, c: pullup(v, c, PU_HALF), grid())
-    out += table("GND Clamp", gnd_clamp, clamp_grid())
-    out += table("POWER Clamp", power_clamp, clamp_grid())
+    out += ["|"]
+    output_model(out, "io33_half", PD_HALF, PU_HALF, [])
     waves = []
     ramps = waveform_tables(waves)
     out += ["[Ramp]", "| variable   typ              min              max"]

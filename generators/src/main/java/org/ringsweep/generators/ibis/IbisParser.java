@@ -234,20 +234,12 @@ public final class IbisParser {
                 case "model" -> {
                     closeModel();
                     closeComponent();
-                    String name = requireArg(arg, n, "the model name");
-                    if (models.containsKey(name)) {
-                        throw new IbisFormatException(file, n, kw, "model `" + name + "` is defined twice; expected unique model names");
-                    }
-                    model = new ModelDraft(name, n);
+                    model = new ModelDraft(uniqueName(arg, n, "model", models.keySet()), n);
                     section = Section.MODEL;
                 }
                 case "model selector" -> {
                     closeModel();
-                    String name = requireArg(arg, n, "the selector name");
-                    if (selectors.containsKey(name)) {
-                        throw new IbisFormatException(file, n, kw, "selector `" + name + "` is defined twice; expected unique selector names");
-                    }
-                    selector = new SelectorDraft(name, n);
+                    selector = new SelectorDraft(uniqueName(arg, n, "selector", selectors.keySet()), n);
                     section = Section.SELECTOR;
                 }
                 case "rising waveform", "falling waveform" -> {
@@ -283,6 +275,15 @@ public final class IbisParser {
                     }
                 }
             }
+        }
+
+        /** The keyword's name argument, checked not to be one of {@code taken}. */
+        private String uniqueName(String arg, int n, String what, Set<String> taken) {
+            String name = requireArg(arg, n, "the " + what + " name");
+            if (taken.contains(name)) {
+                throw new IbisFormatException(file, n, keyword, what + " `" + name + "` is defined twice; expected unique " + what + " names");
+            }
+            return name;
         }
 
         private void duplicate(int n) {

@@ -58,6 +58,37 @@ class IbisNetFileTests {
         assertEquals(2.0, e.receivers().get(0).vih(), 0);
     }
 
+    @Test
+    void theDemoNetsComponentPinsCarryThePackageAndTheHalfDriveCornerSelectsItsModel() {
+        Net net = loader.load(NET);
+        Elaboration typ = new Elaborator().elaborate(net, "typ");
+        // kx32.ibs [Package] typ R_pkg 0.25 Ω, on the driver (pin 1) and the receiver (pin 3)
+        assertEquals(2, typ.circuit().primitives().stream().filter(p -> p instanceof Primitive.Resistor r && r.name().startsWith("rpkg")
+                && r.ohms() == 0.25).count());
+        assertEquals(new Value.Word("io33_half"), net.corners().get("half-drive").values().get(new ValuePath("U1.16", "ibis_select")));
+    }
+
+    @Test
+    void packageFalseIsAFlagThatLeavesThePackageOut() throws IOException {
+        Path parts = Files.createDirectories(dir.resolve("parts"));
+        Files.copy(NET.resolveSibling("../parts/kx32.ibs").normalize(), parts.resolve("kx32.ibs"));
+        Path f = write("""
+                format: ringsweep/net-1
+                net: X
+                rails: { VCC: 3.3 }
+                drivers:
+                  - { pin: U1.1, model: ibis, file: parts/kx32.ibs, component: KX32, ibis_pin: "2", package: false }
+                receivers:
+                  - { pin: U2.1, model: cmos, c_in: 1pF, vih: 2, vil: 0.8 }
+                segments:
+                  - { from: U1.1, to: U2.1, z0: 50, delay: 1ns }
+                """);
+        Net net = loader.load(f);
+        assertEquals(new Value.Flag(false), net.drivers().get(0).parameters().get("package").orElseThrow());
+        Elaboration e = new Elaborator().elaborate(net, "typ");
+        assertTrue(e.circuit().primitives().stream().noneMatch(p -> p.name().startsWith("rpkg") || p.name().startsWith("lpkg")));
+    }
+
     private Path write(String text) throws IOException {
         Path f = dir.resolve("net.yaml");
         Files.writeString(f, text);
