@@ -205,6 +205,23 @@ class IbisWaveformTests {
     }
 
     @Test
+    void aWaveformTheTablesCannotReachFallsBackToTheRampWithAWarning() {
+        // 0 → 3.3 V into 50 Ω to GND: a 25 Ω pull-up from 3.3 V reaches at most 3.3·50/75 = 2.2 V (Ohm's law),
+        // so no coefficients between 0 and 1 can give it
+        double[] t = rows();
+        double[] v = new double[ROWS];
+        for (int i = 0; i < ROWS; i++) {
+            v[i] = 3.3 * Math.min(1, t[i] / 1e-9);
+        }
+        String w = waveform(true, false, t, Map.of(IbisCorner.TYP, v, IbisCorner.MIN, v, IbisCorner.MAX, v));
+        String text = ibisText(0, w + "[Ramp]\ndV/dt_r 1.5/0.8n NA NA\ndV/dt_f 1.5/0.7n NA NA\n");
+        List<String> warnings = new ArrayList<>();
+        assertFalse(IbisSwitching.of(new IbisBuffer(parse(text), IbisCorner.TYP), true, warnings::add).fromTable());
+        assertTrue(warnings.stream().anyMatch(s -> s.contains("disagree with the V–I tables") && s.contains("using [Ramp]")),
+                warnings.toString());
+    }
+
+    @Test
     void ignoredFixtureInductanceIsAWarning() {
         String w = waveform(true, false, rows(), closedForm(true, false, true)).replace("R_fixture = 50\n", "R_fixture = 50\nL_fixture = 2n\n");
         List<String> warnings = new ArrayList<>();
