@@ -115,14 +115,21 @@ public final class PointRunner {
     }
 
     private WrittenDeck writeDeck(Net net, Elaboration elab, String stem, boolean conservative) {
+        return deck(net, elab, stem, conservative, true);
+    }
+
+    /** Renders a deck and, when {@code write}, writes it (a deck-driven engine writes its job's deck itself). */
+    private WrittenDeck deck(Net net, Elaboration elab, String stem, boolean conservative, boolean write) {
         String deckText = deckWriter.render(elab.circuit(), new DeckOptions(rawName(stem), true, conservative));
         Path dir = netDir(net);
         Path deck = dir.resolve(stem + ".cir");
-        try {
-            java.nio.file.Files.createDirectories(dir);
-            java.nio.file.Files.writeString(deck, deckText, java.nio.charset.StandardCharsets.UTF_8);
-        } catch (java.io.IOException e) {
-            throw new java.io.UncheckedIOException("cannot write deck " + deck + ": " + e.getMessage(), e);
+        if (write) {
+            try {
+                java.nio.file.Files.createDirectories(dir);
+                java.nio.file.Files.writeString(deck, deckText, java.nio.charset.StandardCharsets.UTF_8);
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException("cannot write deck " + deck + ": " + e.getMessage(), e);
+            }
         }
         return new WrittenDeck(deck, elab, deckText);
     }
@@ -163,16 +170,69 @@ public final class PointRunner {
         return elaborator.elaborate(net.with(spec.overrides()), label(spec));
     }
 
-    /** Runs a point already elaborated with {@link #elaborate}. */
+    /** Runs a point already elaborated with {@link #elaborate}: {@link #prepare}, {@link #simulate}, {@link #complete}. */
     public ResultRecord run(Net net, PointSpec spec, Elaboration elab) {
-        SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine for run()"));
+        Prepared prepared = prepare(net, spec, elab);
+        return complete(prepared, simulate(prepared));
+    }
+
+    /**
+     * A point ready to simulate ({@link #prepare}).
+     *
+     * @param net         the net
+     * @param spec        the point
+     * @param elaboration its elaboration
+     * @param stem        the deck's file stem ({@code typ-0001})
+     * @param deck        the deck: its path and text
+     */
+    public record Prepared(Net net, PointSpec spec, Elaboration elaboration, String stem, WrittenDeck deck) {
+    }
+
+    /**
+     * Renders a point's deck, the first of the three steps of {@link #run(Net, PointSpec, Elaboration)}.
+     * A deck-driven engine writes the deck itself when it runs it ({@link SimulationJob}); for an
+     * in-process engine the deck is written here, for the record.
+     *
+     * @throws DeckWriteException when the deck cannot be rendered
+     * @throws java.io.UncheckedIOException when it cannot be written
+     */
+    public Prepared prepare(Net net, PointSpec spec, Elaboration elab) {
+        SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine to run points"));
         String stem = deckStem(spec);
-        WrittenDeck written = writeDeck(net, elab, stem, false);
+        return new Prepared(net, spec, elab, stem, deck(net, elab, stem, false, eng instanceof CircuitEngine));
+    }
+
+    /**
+     * Simulates a prepared point: the only step that runs the engine. Safe on any thread; the
+     * callers of {@link PointPipeline} run it on one thread while they prepare and complete others.
+     *
+     * @return what the engine gave; never throws for a simulation problem
+     */
+    public SimulationOutcome simulate(Prepared p) {
+        SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine to run points"));
         // An in-process engine solves the circuit itself; the deck is still written for the record.
-        SimulationOutcome outcome = eng instanceof CircuitEngine inProcess
-                ? inProcess.solve(elab.circuit(), timeout)
-                : eng.run(job(written, stem, elab));
-        return finish(net, spec, elab, eng, stem, written, outcome);
+        return eng instanceof CircuitEngine inProcess
+                ? inProcess.solve(p.elaboration().circuit(), timeout)
+                : eng.run(job(p.deck(), p.stem(), p.elaboration()));
+    }
+
+    /**
+     * The record of a simulated point: the conservative retry when the run failed in a way it can
+     * cure (this runs the engine once more, on the calling thread), else the measurements.
+     */
+    public ResultRecord complete(Prepared p, SimulationOutcome outcome) {
+        SimulationEngine eng = engine.orElseThrow(() -> new IllegalStateException("no engine to run points"));
+        return finish(p.net(), p.spec(), p.elaboration(), eng, p.stem(), p.deck(), outcome);
+    }
+
+    /**
+     * Whether {@link #complete} runs the engine again for this outcome (the conservative retry).
+     *
+     * @param outcome what {@link #simulate} gave
+     */
+    public boolean retries(SimulationOutcome outcome) {
+        return outcome instanceof SimulationOutcome.Failure f && isRetryable(f.kind())
+                && !(engine.orElse(null) instanceof CircuitEngine) && !Thread.currentThread().isInterrupted();
     }
 
     /**
@@ -254,10 +314,10 @@ public final class PointRunner {
         List<String> warnings = new ArrayList<>(elab.warnings());
         // An interrupted run (Ctrl-C, a stopping batch) is not retried: its record is discarded anyway.
         // The conservative options are deck options: only a deck-driven engine can retry with them.
-        if (outcome instanceof SimulationOutcome.Failure first && isRetryable(first.kind()) && !(eng instanceof CircuitEngine)
-                && !Thread.currentThread().isInterrupted()) {
+        if (retries(outcome)) {
+            SimulationOutcome.Failure first = (SimulationOutcome.Failure) outcome;
             String retryStem = stem + "-conservative";
-            written = writeDeck(net, elab, retryStem, true);
+            written = deck(net, elab, retryStem, true, false); // the engine writes it
             outcome = eng.run(job(written, retryStem, elab));
             String firstText = "first run failed (" + first.kind().name().toLowerCase(java.util.Locale.ROOT) + "): " + first.message();
             if (outcome instanceof SimulationOutcome.Failure second) {

@@ -17,6 +17,7 @@ import org.ringsweep.generators.elaborate.Elaboration;
 import org.ringsweep.generators.elaborate.ElaborationException;
 import org.ringsweep.generators.elaborate.Elaborator;
 import org.ringsweep.runner.check.Caution;
+import org.ringsweep.runner.check.PointPipeline;
 import org.ringsweep.runner.check.PointRunner;
 import org.ringsweep.runner.check.ResultsFile;
 import org.ringsweep.runner.engine.SimulationEngine;
@@ -33,7 +34,9 @@ import org.ringsweep.runner.results.Verdict;
 /**
  * The shared body of {@code check}, {@code deck} and {@code demo}: load every net (all input
  * errors first, nothing simulated when there is one), plan the points, then write decks or run
- * them one by one, appending each record to {@code results.jsonl} as it finishes.
+ * them one engine run at a time ({@link PointPipeline}: the next deck is written and the last
+ * point measured while the engine runs), appending each record to {@code results.jsonl} in order
+ * as it finishes.
  */
 final class CheckFlow {
     /** What a run gave. */
@@ -70,7 +73,6 @@ final class CheckFlow {
         Duration timeout = common.timeout();
         Map<Net, List<PointRunner.PointSpec>> plan = new LinkedHashMap<>();
         Map<Net, Map<PointRunner.PointSpec, Elaboration>> elaborated = new java.util.IdentityHashMap<>();
-        // Points whose plugin model threw while elaborating: error records, not input errors.
         Map<Net, Map<PointRunner.PointSpec, PluginFailureException>> failed = new java.util.IdentityHashMap<>();
         List<String> problems = new ArrayList<>();
         try {
@@ -79,33 +81,18 @@ final class CheckFlow {
             err.println("ringsweep: " + e.getMessage());
             return new Outcome(ExitCodes.INPUT, List.of());
         }
-        for (Path file : files) {
-            try {
-                Net net = loader.load(file);
-                Point overrides = points.parse(net, sets.stream().map(PointParser::fromSetOption).toList());
-                List<PointRunner.PointSpec> specs = new ArrayList<>();
-                specs.add(new PointRunner.PointSpec("typ", overrides, Map.of(), 1));
-                if (corners) {
-                    net.corners().forEach((name, corner) -> specs.add(new PointRunner.PointSpec(name, corner.then(overrides), Map.of(), 1)));
-                }
-                PointRunner planner = new PointRunner(elaborator, null, Optional.empty(), common.out, timeout);
-                Map<PointRunner.PointSpec, Elaboration> byPoint = new java.util.HashMap<>();
-                Map<PointRunner.PointSpec, PluginFailureException> failures = new java.util.HashMap<>();
-                for (PointRunner.PointSpec s : specs) {
-                    try {
-                        byPoint.put(s, planner.elaborate(net, s)); // every input check before anything runs
-                    } catch (PluginFailureException e) {
-                        failures.put(s, e);
-                    }
-                }
-                elaborated.put(net, byPoint);
-                failed.put(net, failures);
-                plan.put(net, specs);
-            } catch (InputException | ElaborationException e) {
-                problems.add(e.getMessage());
-            } catch (NetValidationException e) {
-                problems.add(file + ": " + e.getMessage());
+        PointRunner planner = new PointRunner(elaborator, null, Optional.empty(), common.out, timeout);
+        // Files load and elaborate in parallel (loader, parser and elaborator are thread-safe), which
+        // shortens the wait before the first simulation; nets and problems keep the files' order.
+        List<Loaded> loaded = files.parallelStream().map(file -> load(file, loader, points, planner, sets, corners)).toList();
+        for (Loaded l : loaded) {
+            if (l.problem() != null) {
+                problems.add(l.problem());
+                continue;
             }
+            elaborated.put(l.net(), l.elaborated());
+            failed.put(l.net(), l.failed());
+            plan.put(l.net(), l.specs());
         }
         if (!problems.isEmpty()) {
             problems.forEach(p -> err.println("ringsweep: " + p));
@@ -143,26 +130,25 @@ final class CheckFlow {
             return new Outcome(code, List.of());
         }
         List<ResultRecord> records = new ArrayList<>();
-        try (ResultsFile results = ResultsFile.create(common.out)) {
-            for (Map.Entry<Net, List<PointRunner.PointSpec>> e : plan.entrySet()) {
-                for (PointRunner.PointSpec s : e.getValue()) {
-                    ResultRecord r;
-                    PluginFailureException failure = failed.get(e.getKey()).get(s);
-                    try {
-                        r = failure != null ? runner.pluginErrorRecord(e.getKey(), s, failure)
-                                : runner.run(e.getKey(), s, elaborated.get(e.getKey()).get(s));
-                    } catch (RuntimeException ex) {
-                        // A model or engine failure for this point: record it and go on.
-                        r = runner.errorRecord(e.getKey(), s, String.valueOf(ex.getMessage()));
-                    }
-                    results.append(r);
-                    records.add(r);
-                    if (common.json) {
-                        out.println(ResultJson.line(r));
-                        out.flush();
-                    }
-                }
+        List<PointPipeline.Item> items = new ArrayList<>();
+        for (Map.Entry<Net, List<PointRunner.PointSpec>> e : plan.entrySet()) {
+            for (PointRunner.PointSpec s : e.getValue()) {
+                PluginFailureException failure = failed.get(e.getKey()).get(s);
+                items.add(failure != null ? PointPipeline.Item.done(e.getKey(), s, runner.pluginErrorRecord(e.getKey(), s, failure))
+                        : PointPipeline.Item.of(e.getKey(), s, elaborated.get(e.getKey()).get(s)));
             }
+        }
+        try (ResultsFile results = ResultsFile.create(common.out)) {
+            // One engine run at a time; decks are written and results measured while it runs.
+            // A model or engine failure of a point becomes its error record and the run goes on.
+            new PointPipeline(runner).run(items, r -> {
+                results.append(r);
+                records.add(r);
+                if (common.json) {
+                    out.println(ResultJson.line(r));
+                    out.flush();
+                }
+            });
         }
         if (!common.noReport) {
             ReportStep.run(err, common.quiet, () -> org.ringsweep.runner.report.Reports.afterCheck(common.out, records, sets));
@@ -178,6 +164,40 @@ final class CheckFlow {
             }
         }
         return new Outcome(exitCode(records), records);
+    }
+
+    /** One net file planned: its points and their elaborations, or the input problem that stops the run. */
+    private record Loaded(Net net, List<PointRunner.PointSpec> specs, Map<PointRunner.PointSpec, Elaboration> elaborated,
+                          Map<PointRunner.PointSpec, PluginFailureException> failed, String problem) {
+    }
+
+    /** Loads a net file and elaborates each of its points (every input check before anything runs). */
+    private static Loaded load(Path file, NetFileLoader loader, PointParser points, PointRunner planner, List<String> sets,
+                               boolean corners) {
+        try {
+            Net net = loader.load(file);
+            Point overrides = points.parse(net, sets.stream().map(PointParser::fromSetOption).toList());
+            List<PointRunner.PointSpec> specs = new ArrayList<>();
+            specs.add(new PointRunner.PointSpec("typ", overrides, Map.of(), 1));
+            if (corners) {
+                net.corners().forEach((name, corner) -> specs.add(new PointRunner.PointSpec(name, corner.then(overrides), Map.of(), 1)));
+            }
+            Map<PointRunner.PointSpec, Elaboration> byPoint = new java.util.HashMap<>();
+            // Points whose plugin model threw while elaborating: error records, not input errors.
+            Map<PointRunner.PointSpec, PluginFailureException> failures = new java.util.HashMap<>();
+            for (PointRunner.PointSpec s : specs) {
+                try {
+                    byPoint.put(s, planner.elaborate(net, s));
+                } catch (PluginFailureException e) {
+                    failures.put(s, e);
+                }
+            }
+            return new Loaded(net, specs, byPoint, failures, null);
+        } catch (InputException | ElaborationException e) {
+            return new Loaded(null, null, null, null, e.getMessage());
+        } catch (NetValidationException e) {
+            return new Loaded(null, null, null, null, file + ": " + e.getMessage());
+        }
     }
 
     /** 3 when any point is an error (results are incomplete), else 1 when any fails, else 0. */

@@ -38,6 +38,28 @@ class CliInputErrorTests {
     }
 
     @Test
+    void problemsOfSeveralFilesComeInTheFilesOrderAndNothingIsSimulated() {
+        // The files are loaded in parallel; the report must still follow the command line.
+        java.util.List<MalformedCase> cases = malformedFiles().limit(6).toList();
+        java.util.List<String> args = new java.util.ArrayList<>(java.util.List.of("check", "--out", out.toString()));
+        for (int i = 0; i < cases.size(); i++) {
+            args.add(cases.get(i).file().toString());
+            if (i == 2) {
+                args.add(CliRun.resource("physics/matched-series.yaml").toString()); // a good file among them
+            }
+        }
+        CliRun run = CliRun.of(args.toArray(String[]::new));
+        assertEquals(ExitCodes.INPUT, run.exitCode(), run.err());
+        int last = -1;
+        for (MalformedCase x : cases) {
+            int at = run.err().indexOf(x.file().getFileName().toString());
+            assertTrue(at > last, () -> x.file().getFileName() + " out of order in: " + run.err());
+            last = at;
+        }
+        assertFalse(Files.exists(out.resolve("results.jsonl")), "nothing simulated");
+    }
+
+    @Test
     void missingNetFileIsAnInputError() {
         CliRun run = CliRun.of("check", "--out", out.toString(), out.resolve("nope.yaml").toString());
         assertEquals(ExitCodes.INPUT, run.exitCode());
