@@ -76,6 +76,19 @@ public final class SweepCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    /** The engine to use instead of {@code --engine}'s choice; null outside orchestration tests. */
+    private final SimulationEngine engineOverride;
+
+    /** The command as the CLI runs it: the engine is {@code --engine}'s choice. */
+    public SweepCommand() {
+        this(null);
+    }
+
+    /** @param engineOverride the engine every point runs on, whatever {@code --engine} says (tests of the orchestration) */
+    SweepCommand(SimulationEngine engineOverride) {
+        this.engineOverride = engineOverride;
+    }
+
     @Mixin
     CommonOptions common;
 
@@ -154,11 +167,14 @@ public final class SweepCommand implements Callable<Integer> {
             return ExitCodes.INPUT;
         }
         warnings.forEach(w -> err.println("ringsweep: warning: " + w));
-        CommonOptions.EngineSelection selection = common.selectEngine(err);
-        if (selection.engine().isEmpty()) {
-            return selection.exitCode();
+        SimulationEngine engine = engineOverride;
+        if (engine == null) {
+            CommonOptions.EngineSelection selection = common.selectEngine(err);
+            if (selection.engine().isEmpty()) {
+                return selection.exitCode();
+            }
+            engine = selection.engine().get();
         }
-        SimulationEngine engine = selection.engine().get();
         boolean existed = Files.exists(common.out.resolve(ResultStore.FILE_NAME));
         try (ResultStore store = ResultStore.open(common.out)) {
             if (existed && !resume && !store.isEmpty()) {
@@ -240,10 +256,41 @@ public final class SweepCommand implements Callable<Integer> {
      * each net's points in plan order), leaving out those {@code keep} refuses.
      */
     static Iterator<BatchRunner.Task> tasks(List<SweepPlanner.Plan> plans, java.util.function.BiPredicate<SweepPlanner.Plan, String> keep) {
-        return plans.stream().flatMap(plan -> plan.points().stream()
-                        .map(p -> new BatchRunner.Task(plan.net(), p, key(p)))
-                        .filter(t -> keep.test(plan, t.pointKey())))
-                .iterator();
+        // a hand-made iterator: Stream.flatMap(...).iterator() would buffer a whole plan's points
+        return new Iterator<>() {
+            private int plan;
+            private int point;
+            private BatchRunner.Task next = advance();
+
+            private BatchRunner.Task advance() {
+                for (; plan < plans.size(); plan++, point = 0) {
+                    SweepPlanner.Plan p = plans.get(plan);
+                    while (point < p.points().size()) {
+                        PointRunner.PointSpec spec = p.points().get(point++);
+                        String key = key(spec);
+                        if (keep.test(p, key)) {
+                            return new BatchRunner.Task(p.net(), spec, key);
+                        }
+                    }
+                }
+                return null;
+            }
+
+            @Override
+            public boolean hasNext() {
+                return next != null;
+            }
+
+            @Override
+            public BatchRunner.Task next() {
+                if (next == null) {
+                    throw new java.util.NoSuchElementException();
+                }
+                BatchRunner.Task t = next;
+                next = advance();
+                return t;
+            }
+        };
     }
 
     /** {@code --verify}: the chosen share of the points again on ngspice, compared metric by metric. */

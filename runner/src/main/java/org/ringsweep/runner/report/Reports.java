@@ -147,7 +147,7 @@ public final class Reports {
      * The most points of one net a sweep report draws before it samples them (the HTML report
      * holds its records in memory; {@code junit.xml} always streams every point).
      */
-    static final int POINTS_PER_NET = 2_000;
+    static final int POINTS_PER_NET = 1_000;
 
     /**
      * The sweep report of a store, in bounded memory: per net (its latest file), every point

@@ -117,6 +117,7 @@ public final class SweepPlanner {
                     + (n == Long.MAX_VALUE ? "more than " + Long.MAX_VALUE : String.valueOf(n)) + " points for net " + net.name()
                     + ", more than the limit of " + maxPoints + "; expected fewer values or steps");
         }
+        checkSteps(r.axes());
         List<PointSpec> points = sweep.combine() == Combine.GRID ? new GridPoints(r.axes(), (int) n) : new ZipPoints(r.axes());
         List<String> warnings = new ArrayList<>(r.warnings());
         if (r.axes().isEmpty()) {
@@ -132,7 +133,25 @@ public final class SweepPlanner {
      * @throws InputException as {@link #plan} does for values that do not fit the net
      */
     public static long count(SweepFile sweep, Net net, PointParser parser) {
-        return count(sweep.combine(), resolve(sweep, net, parser).axes());
+        List<Axis> axes = resolve(sweep, net, parser).axes();
+        long n = count(sweep.combine(), axes);
+        if (n <= DEFAULT_MAX_POINTS) {
+            checkSteps(axes);
+        }
+        return n;
+    }
+
+    /**
+     * Parses every step of every range entry once (and forgets it), so a step the parameter
+     * refuses is an input error before the run, not a failure in the middle of it. Done after
+     * the size check, so an absurd {@code steps} is refused at once.
+     */
+    private static void checkSteps(List<Axis> axes) {
+        for (Axis a : axes) {
+            if (a.items() instanceof RangeItems steps) {
+                steps.forEach(checked -> { });
+            }
+        }
     }
 
     private static long count(Combine combine, List<Axis> axes) {
@@ -217,7 +236,6 @@ public final class SweepPlanner {
             List<Item> steps = new RangeItems(r.steps(), k -> new Item(null, null,
                     number(parser, net, path, new Vary.Text(Double.toString(r.log() ? geometricAt(from, to, r.steps(), k)
                             : linearAt(from, to, r.steps(), k)), v.location(), v.key())), true));
-            steps.forEach(checked -> { }); // every step parsed once now, so a bad one is an input error before the run
             return new Axis(v, path, steps);
         } else {
             Vary.SeriesRange s = (Vary.SeriesRange) v.values();
