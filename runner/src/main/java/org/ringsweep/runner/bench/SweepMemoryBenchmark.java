@@ -52,28 +52,8 @@ public final class SweepMemoryBenchmark {
         Path dir = workDir.resolve("sweep-memory");
         try {
             delete(dir);
-            Files.createDirectories(dir.resolve("nets"));
-            Files.writeString(dir.resolve("nets/tiny.yaml"), String.join("\n",
-                    "format: ringsweep/net-1",
-                    "net: TINY",
-                    "rails: { VCC: 3.3 }",
-                    "drivers:",
-                    "  - { pin: U1.1, model: ramp, v_high: VCC, rise: 1ns, r_out: 20 }",
-                    "receivers:",
-                    "  - { pin: U2.1, model: cmos, c_in: 3pF, vih: 2.0, vil: 0.8 }",
-                    "segments:",
-                    "  - { from: U1.1, to: R1.1, z0: 50, delay: 50ps }",
-                    "  - { from: R1.2, to: U2.1, z0: 50, delay: 200ps }",
-                    "parts:",
-                    "  - { ref: R1, kind: resistor, value: 33, between: [R1.1, R1.2] }",
-                    ""), StandardCharsets.UTF_8);
             boolean grid = points >= 2000 && points % 1000 == 0;
-            List<String> sweep = new ArrayList<>(List.of("format: ringsweep/sweep-1", "nets: [nets/tiny.yaml]", "vary:",
-                    "  - { target: R1/value, from: 10, to: 60, steps: " + (grid ? points / 1000 : points) + " }"));
-            if (grid) {
-                sweep.add("  - { target: U1.1/rise, from: 0.5ns, to: 2ns, steps: 1000 }");
-            }
-            Files.write(dir.resolve("sweep.yaml"), sweep, StandardCharsets.UTF_8);
+            writeInputs(dir, grid ? (int) (points / 1000) : (int) points, grid ? 1000 : 0);
             Path out = dir.resolve("out");
             String java = ProcessHandle.current().info().command().orElse("java");
             List<String> command = List.of(java, HEAP, "-Xlog:gc:file=" + dir.resolve("gc.log"), "-cp", System.getProperty("java.class.path"),
@@ -111,6 +91,42 @@ public final class SweepMemoryBenchmark {
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new IllegalStateException("sweep-memory: interrupted", e);
+        }
+    }
+
+    /**
+     * Writes {@code dir/nets/tiny.yaml} (a 20 ohm driver, a 33 ohm series resistor R1 between 50
+     * and 200 ps of 50 ohm line, one 3 pF CMOS receiver) and {@code dir/sweep.yaml}: a grid of
+     * {@code rValues} steps of R1 from 10 to 60 ohm × {@code riseValues} steps of the rise time
+     * from 0.5 to 2 ns (no rise entry when {@code riseValues} is 0).
+     *
+     * @throws UncheckedIOException when the files cannot be written
+     */
+    public static void writeInputs(Path dir, int rValues, int riseValues) {
+        try {
+            Files.createDirectories(dir.resolve("nets"));
+            Files.writeString(dir.resolve("nets/tiny.yaml"), String.join("\n",
+                    "format: ringsweep/net-1",
+                    "net: TINY",
+                    "rails: { VCC: 3.3 }",
+                    "drivers:",
+                    "  - { pin: U1.1, model: ramp, v_high: VCC, rise: 1ns, r_out: 20 }",
+                    "receivers:",
+                    "  - { pin: U2.1, model: cmos, c_in: 3pF, vih: 2.0, vil: 0.8 }",
+                    "segments:",
+                    "  - { from: U1.1, to: R1.1, z0: 50, delay: 50ps }",
+                    "  - { from: R1.2, to: U2.1, z0: 50, delay: 200ps }",
+                    "parts:",
+                    "  - { ref: R1, kind: resistor, value: 33, between: [R1.1, R1.2] }",
+                    ""), StandardCharsets.UTF_8);
+            List<String> sweep = new ArrayList<>(List.of("format: ringsweep/sweep-1", "nets: [nets/tiny.yaml]", "vary:",
+                    "  - { target: R1/value, from: 10, to: 60, steps: " + rValues + " }"));
+            if (riseValues > 0) {
+                sweep.add("  - { target: U1.1/rise, from: 0.5ns, to: 2ns, steps: " + riseValues + " }");
+            }
+            Files.write(dir.resolve("sweep.yaml"), sweep, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the sweep-memory inputs in `" + dir + "`: " + e.getMessage(), e);
         }
     }
 

@@ -5,11 +5,12 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.ringsweep.runner.bench.HeapWatch;
+import org.ringsweep.runner.bench.SweepMemoryBenchmark;
 import picocli.CommandLine;
 
 /**
- * The child JVM of {@link SweepMemoryTests}: writes a one-receiver net and a grid sweep of
- * {@code R1/value} × {@code U1.1/rise} giving the asked number of points, runs the real
+ * The child JVM of {@link SweepMemoryTests}: writes the benchmark's one-receiver net and grid sweep
+ * ({@link SweepMemoryBenchmark#writeInputs}), runs the real
  * {@code sweep} command on it (planner, batch runner, store, results.jsonl, report, summary) with
  * {@link OrchestrationMemoryEngine}, then {@code results --csv} and {@code results --json} into
  * files, and prints {@code exit <code>} per command and {@code live-after-gc <bytes>}: the most heap
@@ -23,28 +24,7 @@ public final class SweepMemoryProbe {
 
     public static void main(String[] args) throws Exception {
         Path dir = Path.of(args[0]);
-        Files.createDirectories(dir.resolve("nets"));
-        Files.writeString(dir.resolve("nets/tiny.yaml"), String.join("\n",
-                "format: ringsweep/net-1",
-                "net: TINY",
-                "rails: { VCC: 3.3 }",
-                "drivers:",
-                "  - { pin: U1.1, model: ramp, v_high: VCC, rise: 1ns, r_out: 20 }",
-                "receivers:",
-                "  - { pin: U2.1, model: cmos, c_in: 3pF, vih: 2.0, vil: 0.8 }",
-                "segments:",
-                "  - { from: U1.1, to: R1.1, z0: 50, delay: 50ps }",
-                "  - { from: R1.2, to: U2.1, z0: 50, delay: 200ps }",
-                "parts:",
-                "  - { ref: R1, kind: resistor, value: 33, between: [R1.1, R1.2] }",
-                ""), StandardCharsets.UTF_8);
-        Files.writeString(dir.resolve("sweep.yaml"), String.join("\n",
-                "format: ringsweep/sweep-1",
-                "nets: [nets/tiny.yaml]",
-                "vary:",
-                "  - { target: R1/value, from: 10, to: 60, steps: " + args[1] + " }",
-                "  - { target: U1.1/rise, from: 0.5ns, to: 2ns, steps: " + args[2] + " }",
-                ""), StandardCharsets.UTF_8);
+        SweepMemoryBenchmark.writeInputs(dir, Integer.parseInt(args[1]), Integer.parseInt(args[2]));
         HeapWatch heap = HeapWatch.start();
         Path out = dir.resolve("out");
         int sweep;
