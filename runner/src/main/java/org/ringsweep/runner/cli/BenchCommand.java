@@ -15,7 +15,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /**
  * {@code ringsweep bench [--only NAME]...}: the benchmarks whose figures the README reports. Without
  * {@code --only} every benchmark but {@code sweep-memory} runs (that one simulates a million points,
- * which takes an hour or more).
+ * which takes a quarter of an hour or more and writes some 5 GB under {@code --work}).
  */
 @Command(name = "bench", mixinStandardHelpOptions = true,
         description = {"Run the benchmarks (raw-file reader throughput, results store, orchestration overhead against bare ngspice,"
