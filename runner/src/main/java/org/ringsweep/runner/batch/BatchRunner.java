@@ -1,13 +1,16 @@
 package org.ringsweep.runner.batch;
 
 import java.util.ArrayList;
+import java.util.Iterator;
 import java.util.List;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
+import java.util.concurrent.RejectedExecutionException;
+import java.util.concurrent.Semaphore;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.concurrent.atomic.AtomicReference;
 import org.ringsweep.api.net.Net;
 import org.ringsweep.runner.check.PointRunner;
 import org.ringsweep.runner.results.ResultRecord;
@@ -20,10 +23,18 @@ import org.ringsweep.runner.results.Verdict;
  * simulator process (the batch size: consecutive points of one net go to one worker as a chunk,
  * see {@link PointRunner#runBatch}).
  *
+ * <p><b>Bounded.</b> Tasks are taken from an iterator only as workers free up: at most
+ * {@link #IN_FLIGHT_PER_WORKER} chunks per worker are queued, running or waiting for the writer
+ * at any time, so a sweep of a million points holds a few dozen points in memory, never the
+ * sweep. Once its records are handed to the sink a chunk is dropped; the runner keeps counters only.
+ *
  * <p>{@link #stop()} (Ctrl-C) interrupts the workers, which ends their ngspice runs; records
  * of points cut short that way are discarded, never written, so a resumed run re-runs them.
  */
 public final class BatchRunner {
+    /** Chunks per worker that may be in flight (submitted, running or being written): one running, one ready. */
+    public static final int IN_FLIGHT_PER_WORKER = 2;
+
     /** One point to run. */
     public record Task(Net net, PointRunner.PointSpec spec, String pointKey) {
     }
@@ -79,20 +90,51 @@ public final class BatchRunner {
      * @return the chunks, in order, every task in exactly one
      */
     static List<List<Task>> chunks(List<Task> tasks, int jobs, int batchSize) {
-        int size = Math.max(1, Math.min(batchSize, (tasks.size() + jobs - 1) / jobs));
         List<List<Task>> chunks = new ArrayList<>();
-        List<Task> current = new ArrayList<>();
-        for (Task t : tasks) {
-            if (!current.isEmpty() && (current.size() == size || !current.get(0).net().equals(t.net()))) {
-                chunks.add(List.copyOf(current));
-                current.clear();
-            }
-            current.add(t);
-        }
-        if (!current.isEmpty()) {
-            chunks.add(List.copyOf(current));
-        }
+        new Chunker(tasks.iterator(), chunkSize(tasks.size(), jobs, batchSize)).forEachRemaining(chunks::add);
         return chunks;
+    }
+
+    /** The most tasks per chunk: the batch size, or an even share of {@code total} over the workers if smaller. */
+    static int chunkSize(long total, int jobs, int batchSize) {
+        return (int) Math.max(1, Math.min(batchSize, (total + jobs - 1) / jobs));
+    }
+
+    /** Cuts an iterator of tasks into chunks as they are asked for (one chunk read ahead at most). */
+    private static final class Chunker implements Iterator<List<Task>> {
+        private final Iterator<Task> tasks;
+        private final int size;
+        private Task next;
+
+        Chunker(Iterator<Task> tasks, int size) {
+            this.tasks = tasks;
+            this.size = size;
+            this.next = tasks.hasNext() ? tasks.next() : null;
+        }
+
+        @Override
+        public boolean hasNext() {
+            return next != null;
+        }
+
+        @Override
+        public List<Task> next() {
+            if (next == null) {
+                throw new java.util.NoSuchElementException();
+            }
+            List<Task> chunk = new ArrayList<>(size);
+            chunk.add(next);
+            next = null;
+            while (tasks.hasNext()) {
+                Task t = tasks.next();
+                if (chunk.size() == size || !chunk.get(0).net().equals(t.net())) {
+                    next = t;
+                    break;
+                }
+                chunk.add(t);
+            }
+            return List.copyOf(chunk);
+        }
     }
 
     /**
@@ -100,52 +142,99 @@ public final class BatchRunner {
      *
      * @return the number of records written
      */
-    public int run(List<Task> tasks, Sink sink, Progress progress) throws InterruptedException {
+    public long run(List<Task> tasks, Sink sink, Progress progress) throws InterruptedException {
+        return run(tasks.iterator(), tasks.size(), sink, progress);
+    }
+
+    /**
+     * Runs the tasks as the iterator yields them, never holding more than
+     * {@link #IN_FLIGHT_PER_WORKER} chunks per worker, and waits for them.
+     *
+     * @param tasks the tasks in order; read on the calling thread only
+     * @param total how many the iterator yields (for the even share of small sweeps; an estimate is safe)
+     * @return the number of records written
+     * @throws RuntimeException what the sink threw (e.g. the store could not be written); the run stops
+     */
+    public long run(Iterator<Task> tasks, long total, Sink sink, Progress progress) throws InterruptedException {
         workers = Executors.newFixedThreadPool(jobs, r -> {
             Thread t = new Thread(r, "ringsweep-worker");
             t.setDaemon(true);
             return t;
         });
         writer = Executors.newSingleThreadExecutor(r -> new Thread(r, "ringsweep-writer"));
-        List<Future<?>> futures = new ArrayList<>();
-        int[] written = {0};
-        for (List<Task> chunk : chunks(tasks, jobs, batchSize)) {
-            futures.add(workers.submit(() -> {
-                if (stopping.get()) {
-                    return;
-                }
-                List<ResultRecord> records = runChunk(chunk);
-                if (stopping.get() || Thread.currentThread().isInterrupted()) {
-                    return; // cut short by stop(): not results
-                }
-                try {
-                    writer.submit(() -> {
-                        for (int i = 0; i < chunk.size(); i++) {
-                            ResultRecord finished = records.get(i);
-                            sink.accept(chunk.get(i), finished);
-                            written[0]++;
-                            progress.finished(finished.verdict() == Verdict.FAIL, finished.verdict() == Verdict.ERROR);
-                        }
-                    });
-                } catch (java.util.concurrent.RejectedExecutionException stoppedMeanwhile) {
-                    // stop() closed the writer between the check above and here: not results
-                }
-            }));
-        }
+        Semaphore slots = new Semaphore(jobs * IN_FLIGHT_PER_WORKER);
+        AtomicReference<Throwable> failure = new AtomicReference<>();
+        AtomicLong written = new AtomicLong();
+        Chunker chunker = new Chunker(tasks, chunkSize(total, jobs, batchSize));
         try {
-            for (Future<?> f : futures) {
-                f.get();
+            while (!stopping.get() && failure.get() == null && chunker.hasNext()) {
+                if (!slots.tryAcquire(100, TimeUnit.MILLISECONDS)) {
+                    continue; // every slot busy: look at stop() and failures again
+                }
+                List<Task> chunk = chunker.next();
+                try {
+                    workers.submit(() -> work(chunk, sink, progress, slots, failure, written));
+                } catch (RejectedExecutionException stoppedMeanwhile) {
+                    slots.release();
+                }
             }
-        } catch (ExecutionException e) {
-            throw new IllegalStateException("a worker failed: " + e.getCause(), e.getCause());
-        } catch (java.util.concurrent.CancellationException e) {
-            // stopped
         } finally {
-            workers.shutdownNow();
+            if (failure.get() != null) {
+                stopping.set(true);
+                workers.shutdownNow();
+            } else {
+                workers.shutdown();
+            }
+            workers.awaitTermination(Long.MAX_VALUE, TimeUnit.NANOSECONDS);
             writer.shutdown();
             writer.awaitTermination(1, TimeUnit.MINUTES);
         }
-        return written[0];
+        Throwable f = failure.get();
+        if (f instanceof RuntimeException e) {
+            throw e;
+        }
+        if (f != null) {
+            throw new IllegalStateException("a worker failed: " + f, f);
+        }
+        return written.get();
+    }
+
+    /** A worker's part: run the chunk, hand its records to the writer; the slot is freed once they are written. */
+    private void work(List<Task> chunk, Sink sink, Progress progress, Semaphore slots, AtomicReference<Throwable> failure,
+                      AtomicLong written) {
+        boolean handed = false;
+        try {
+            if (stopping.get()) {
+                return;
+            }
+            List<ResultRecord> records = runChunk(chunk);
+            if (stopping.get() || Thread.currentThread().isInterrupted()) {
+                return; // cut short by stop(): not results
+            }
+            writer.submit(() -> {
+                try {
+                    for (int i = 0; i < chunk.size(); i++) {
+                        ResultRecord finished = records.get(i);
+                        sink.accept(chunk.get(i), finished);
+                        written.incrementAndGet();
+                        progress.finished(finished.verdict() == Verdict.FAIL, finished.verdict() == Verdict.ERROR);
+                    }
+                } catch (RuntimeException | Error e) {
+                    failure.compareAndSet(null, e);
+                } finally {
+                    slots.release();
+                }
+            });
+            handed = true;
+        } catch (RejectedExecutionException stoppedMeanwhile) {
+            // stop() closed the writer between the check above and here: not results
+        } catch (RuntimeException | Error e) {
+            failure.compareAndSet(null, e);
+        } finally {
+            if (!handed) {
+                slots.release();
+            }
+        }
     }
 
     /** The records of a chunk, in order; a point that cannot be elaborated or run gives an error record. */

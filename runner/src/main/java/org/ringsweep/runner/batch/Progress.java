@@ -3,7 +3,7 @@ package org.ringsweep.runner.batch;
 import java.io.PrintWriter;
 import java.time.Duration;
 import java.util.Locale;
-import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.LongSupplier;
 
 /**
@@ -13,15 +13,15 @@ import java.util.function.LongSupplier;
  */
 public final class Progress {
     private final PrintWriter err;
-    private final int total;
+    private final long total;
     private final boolean terminal;
     private final boolean quiet;
     private final Duration interval;
     private final LongSupplier clock;
     private final long start;
-    private final AtomicInteger done = new AtomicInteger();
-    private final AtomicInteger failed = new AtomicInteger();
-    private final AtomicInteger errors = new AtomicInteger();
+    private final AtomicLong done = new AtomicLong();
+    private final AtomicLong failed = new AtomicLong();
+    private final AtomicLong errors = new AtomicLong();
     private long lastPrint;
 
     /**
@@ -32,7 +32,7 @@ public final class Progress {
      * @param interval the least time between plain lines
      * @param clock    nanosecond clock (System::nanoTime outside tests)
      */
-    public Progress(PrintWriter err, int total, boolean terminal, boolean quiet, Duration interval, LongSupplier clock) {
+    public Progress(PrintWriter err, long total, boolean terminal, boolean quiet, Duration interval, LongSupplier clock) {
         this.err = err;
         this.total = total;
         this.terminal = terminal;
@@ -45,7 +45,7 @@ public final class Progress {
 
     /** Counts one finished point. */
     public synchronized void finished(boolean fail, boolean error) {
-        int d = done.incrementAndGet();
+        long d = done.incrementAndGet();
         if (fail) {
             failed.incrementAndGet();
         }
@@ -69,7 +69,7 @@ public final class Progress {
 
     /** The status line at time {@code now}. */
     String line(long now) {
-        int d = done.get();
+        long d = done.get();
         double seconds = Math.max(1e-9, (now - start) / 1e9);
         double rate = d / seconds;
         String eta = d == 0 ? "?" : formatDuration((total - d) / rate);
@@ -79,7 +79,7 @@ public final class Progress {
 
     /** An estimate of the whole run's length once a few points have finished, or empty before. */
     public synchronized java.util.Optional<String> estimate() {
-        int d = done.get();
+        long d = done.get();
         if (d < 3) {
             return java.util.Optional.empty();
         }

@@ -33,12 +33,23 @@ public final class Verification {
     /**
      * What the verification found.
      *
-     * @param compared points re-simulated and compared
-     * @param worst    metric → largest difference
-     * @param flagged  point key → what differed beyond tolerance
+     * @param compared     points re-simulated and compared
+     * @param worst        metric → largest difference
+     * @param flagged      point key → what differed beyond tolerance, the first {@value #LISTED} flagged points
+     * @param flaggedCount all flagged points
      */
-    public record Report(int compared, Map<String, Worst> worst, Map<String, String> flagged) {
+    public record Report(long compared, Map<String, Worst> worst, Map<String, String> flagged, long flaggedCount) {
     }
+
+    /** Receives a flagged point as it is found: its task, its record as stored, and what differed. */
+    @FunctionalInterface
+    public interface Flagged {
+        /** Called once per flagged point, on the calling thread. */
+        void accept(BatchRunner.Task task, ResultRecord stored, String why);
+    }
+
+    /** The most flagged points a report lists by name (every one is handed to {@link Flagged}). */
+    public static final int LISTED = 100;
 
     private Verification() {
     }
@@ -115,14 +126,26 @@ public final class Verification {
         return Double.NaN;
     }
 
-    /** Runs the chosen tasks with the reference runner and compares; returns the report. */
-    public static Report run(List<BatchRunner.Task> chosen, Map<String, ResultRecord> results, PointRunner reference,
-                             java.util.function.ToDoubleFunction<BatchRunner.Task> swing) {
+    /**
+     * Runs the chosen tasks with the reference runner and compares, one at a time: nothing per
+     * point is kept but the first {@value #LISTED} flagged keys.
+     *
+     * @param chosen    the tasks to verify, read once
+     * @param stored    a task's record as stored; empty when it is not in the store (it is skipped)
+     * @param reference the reference runner (ngspice)
+     * @param swing     a task's driver swing (V)
+     * @param onFlagged told of each point beyond tolerance as it is found
+     */
+    public static Report run(java.util.Iterator<BatchRunner.Task> chosen,
+                             java.util.function.Function<BatchRunner.Task, java.util.Optional<ResultRecord>> stored,
+                             PointRunner reference, java.util.function.ToDoubleFunction<BatchRunner.Task> swing, Flagged onFlagged) {
         Map<String, Worst> worst = new LinkedHashMap<>();
         Map<String, String> flagged = new LinkedHashMap<>();
-        int compared = 0;
-        for (BatchRunner.Task t : chosen) {
-            ResultRecord result = results.get(t.pointKey());
+        long compared = 0;
+        long flaggedCount = 0;
+        while (chosen.hasNext()) {
+            BatchRunner.Task t = chosen.next();
+            ResultRecord result = stored.apply(t).orElse(null);
             if (result == null) {
                 continue;
             }
@@ -130,9 +153,14 @@ public final class Verification {
             compared++;
             List<String> beyond = compare(result, ref, swing.applyAsDouble(t), worst);
             if (!beyond.isEmpty()) {
-                flagged.put(t.pointKey(), String.join("; ", beyond));
+                String why = String.join("; ", beyond);
+                flaggedCount++;
+                if (flagged.size() < LISTED) {
+                    flagged.put(t.pointKey(), why);
+                }
+                onFlagged.accept(t, result, why);
             }
         }
-        return new Report(compared, worst, flagged);
+        return new Report(compared, worst, flagged, flaggedCount);
     }
 }

@@ -3,12 +3,10 @@ package org.ringsweep.runner.cli;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.concurrent.Callable;
 import org.ringsweep.runner.store.ResultStore;
 import org.ringsweep.runner.store.StoreExport;
-import org.ringsweep.runner.store.StoredRow;
+import org.ringsweep.runner.store.RowSource;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -49,14 +47,13 @@ public final class ResultsCommand implements Callable<Integer> {
             return ExitCodes.INPUT;
         }
         try (ResultStore store = ResultStore.open(outDir)) {
-            List<StoredRow> rows = best ? new ArrayList<>(store.bestPerNet().values()) : store.rows();
-            StringBuilder b = new StringBuilder();
+            // streamed row by row from a cursor to the writer: a store of any size prints in bounded memory
+            RowSource rows = best ? store.bestPerNet().values()::forEach : store.allRows();
             if (format.csv) {
-                StoreExport.toCsv(rows, b);
+                StoreExport.toCsv(rows, out);
             } else {
-                StoreExport.toJsonLines(rows, b);
+                StoreExport.toJsonLines(rows, out);
             }
-            out.print(b);
             out.flush();
         }
         return ExitCodes.OK;

@@ -13,7 +13,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
+import java.util.Iterator;
 import java.util.concurrent.Callable;
 import org.ringsweep.api.model.ModelCatalog;
 import org.ringsweep.api.net.Net;
@@ -22,6 +22,7 @@ import org.ringsweep.generators.deck.DeckWriter;
 import org.ringsweep.generators.elaborate.ElaborationException;
 import org.ringsweep.generators.elaborate.Elaborator;
 import org.ringsweep.runner.batch.BatchRunner;
+import org.ringsweep.runner.batch.Verification;
 import org.ringsweep.runner.batch.Progress;
 import org.ringsweep.runner.check.Caution;
 import org.ringsweep.runner.check.PointRunner;
@@ -34,9 +35,9 @@ import org.ringsweep.runner.plugins.PluginFailureException;
 import org.ringsweep.runner.plugins.PluginLoadException;
 import org.ringsweep.runner.plugins.PluginRegistry;
 import org.ringsweep.runner.results.Verdict;
+import org.ringsweep.runner.store.FinishedPoints;
 import org.ringsweep.runner.store.PointKey;
 import org.ringsweep.runner.store.ResultStore;
-import org.ringsweep.runner.store.StoreExport;
 import org.ringsweep.runner.store.StoredRow;
 import org.ringsweep.runner.sweep.SweepFile;
 import org.ringsweep.runner.sweep.SweepFileLoader;
@@ -74,6 +75,19 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    /** The engine to use instead of {@code --engine}'s choice; null outside orchestration tests. */
+    private final SimulationEngine engineOverride;
+
+    /** The command as the CLI runs it: the engine is {@code --engine}'s choice. */
+    public SweepCommand() {
+        this(null);
+    }
+
+    /** @param engineOverride the engine every point runs on, whatever {@code --engine} says (tests of the orchestration) */
+    SweepCommand(SimulationEngine engineOverride) {
+        this.engineOverride = engineOverride;
+    }
 
     @Mixin
     CommonOptions common;
@@ -153,43 +167,46 @@ public final class SweepCommand implements Callable<Integer> {
             return ExitCodes.INPUT;
         }
         warnings.forEach(w -> err.println("ringsweep: warning: " + w));
-        CommonOptions.EngineSelection selection = common.selectEngine(err);
-        if (selection.engine().isEmpty()) {
-            return selection.exitCode();
+        SimulationEngine engine = engineOverride;
+        if (engine == null) {
+            CommonOptions.EngineSelection selection = common.selectEngine(err);
+            if (selection.engine().isEmpty()) {
+                return selection.exitCode();
+            }
+            engine = selection.engine().get();
         }
-        SimulationEngine engine = selection.engine().get();
         boolean existed = Files.exists(common.out.resolve(ResultStore.FILE_NAME));
         try (ResultStore store = ResultStore.open(common.out)) {
-            if (existed && !resume && !store.rows().isEmpty()) {
+            if (existed && !resume && !store.isEmpty()) {
                 err.println("ringsweep: sweep: " + store.file() + " already holds results; give --resume to continue"
                         + " that sweep, or another --out");
                 return ExitCodes.INPUT;
             }
-            List<BatchRunner.Task> tasks = new ArrayList<>();
-            int skipped = 0;
+            // the plan is walked twice, once to count what is left and once to run it; neither
+            // walk keeps a point: only the finished-point hashes of --resume (8 bytes a point)
+            Map<SweepPlanner.Plan, FinishedPoints> finished = new java.util.IdentityHashMap<>();
+            long todo = 0;
+            long total = 0;
             if (!common.quiet) {
                 out.println("Plan: " + plans.size() + " net(s)");
             }
             for (SweepPlanner.Plan plan : plans) {
-                Set<String> finished = resume ? store.finishedKeys(plan.net().sourceHash()) : Set.of();
-                int todo = 0;
-                for (PointRunner.PointSpec p : plan.points()) {
-                    String key = PointKey.of(p.corner(), p.swept());
-                    if (finished.contains(key)) {
-                        skipped++;
-                    } else {
-                        tasks.add(new BatchRunner.Task(plan.net(), p, key));
-                        todo++;
-                    }
+                long left = plan.points().size();
+                if (resume) {
+                    FinishedPoints done = store.finished(plan.net().sourceHash());
+                    finished.put(plan, done);
+                    left = done.size() == 0 ? left : plan.points().stream().filter(p -> !done.contains(key(p))).count();
                 }
+                todo += left;
+                total += plan.points().size();
                 if (!common.quiet) {
                     out.printf(Locale.ROOT, "  %-24s %6d point(s)%s%n", plan.net().name(), plan.points().size(),
-                            resume ? " (" + todo + " to run)" : "");
+                            resume ? " (" + left + " to run)" : "");
                 }
             }
             if (!common.quiet) {
-                out.printf(Locale.ROOT, "  total %d point(s), %d to run with %d job(s)%s%n", tasks.size() + skipped, tasks.size(), workers,
-                        skipped > 0 ? ", " + skipped + " already finished" : "");
+                out.printf(Locale.ROOT, "  total %d point(s), %d to run with %d job(s)%s%n", total, todo, workers,
+                        total > todo ? ", " + (total - todo) + " already finished" : "");
                 out.flush();
             }
             DeckWriter decks = common.deckWriter();
@@ -197,9 +214,13 @@ public final class SweepCommand implements Callable<Integer> {
             BatchRunner batch = new BatchRunner(runner, workers, batchSize);
             Thread hook = new Thread(batch::stop, "ringsweep-stop");
             Runtime.getRuntime().addShutdownHook(hook);
-            Progress progress = new Progress(err, tasks.size(), System.console() != null, common.quiet, Duration.ofSeconds(10), System::nanoTime);
+            Progress progress = new Progress(err, todo, System.console() != null, common.quiet, Duration.ofSeconds(10), System::nanoTime);
             try {
-                batch.run(tasks, (task, record) -> store.put(record, task.pointKey()), progress);
+                Iterator<BatchRunner.Task> tasks = tasks(plans, (plan, key) -> {
+                    FinishedPoints done = finished.get(plan);
+                    return done == null || done.size() == 0 || !done.contains(key);
+                });
+                batch.run(tasks, todo, (task, record) -> store.put(record, task.pointKey()), progress);
             } finally {
                 try {
                     Runtime.getRuntime().removeShutdownHook(hook);
@@ -207,22 +228,69 @@ public final class SweepCommand implements Callable<Integer> {
                     // the hook is running: Ctrl-C
                 }
             }
+            finished.clear();
             if (verify != null && !batch.stopped()) {
                 int code = verify(plans, store, engine, elaborator, decks, timeout, registry, out, err);
                 if (code != ExitCodes.OK) {
                     return code;
                 }
             }
-            List<StoredRow> rows = store.rows();
-            writeJsonLines(rows);
+            writeJsonLines(store);
             if (!common.noReport) {
                 ReportStep.run(err, common.quiet, () -> org.ringsweep.runner.report.Reports.afterSweep(common.out, store));
             }
+            Map<String, long[]> counts = counts(store, plans);
             if (!common.quiet) {
-                summary(store, plans, out);
+                summary(store, plans, counts, out);
             }
-            return exitCode(rows, plans);
+            return exitCode(counts);
         }
+    }
+
+    private static String key(PointRunner.PointSpec p) {
+        return PointKey.of(p.corner(), p.swept());
+    }
+
+    /**
+     * The plans' points as tasks, built one at a time as the iterator is read (nets in order,
+     * each net's points in plan order), leaving out those {@code keep} refuses.
+     */
+    static Iterator<BatchRunner.Task> tasks(List<SweepPlanner.Plan> plans, java.util.function.BiPredicate<SweepPlanner.Plan, String> keep) {
+        // a hand-made iterator: Stream.flatMap(...).iterator() would buffer a whole plan's points
+        return new Iterator<>() {
+            private int plan;
+            private int point;
+            private BatchRunner.Task next = advance();
+
+            private BatchRunner.Task advance() {
+                for (; plan < plans.size(); plan++, point = 0) {
+                    SweepPlanner.Plan p = plans.get(plan);
+                    while (point < p.points().size()) {
+                        PointRunner.PointSpec spec = p.points().get(point++);
+                        String key = key(spec);
+                        if (keep.test(p, key)) {
+                            return new BatchRunner.Task(p.net(), spec, key);
+                        }
+                    }
+                }
+                return null;
+            }
+
+            @Override
+            public boolean hasNext() {
+                return next != null;
+            }
+
+            @Override
+            public BatchRunner.Task next() {
+                if (next == null) {
+                    throw new java.util.NoSuchElementException();
+                }
+                BatchRunner.Task t = next;
+                next = advance();
+                return t;
+            }
+        };
     }
 
     /** {@code --verify}: the chosen share of the points again on ngspice, compared metric by metric. */
@@ -248,63 +316,69 @@ public final class SweepCommand implements Callable<Integer> {
             err.println("ringsweep: sweep: --verify needs ngspice: " + NgspiceEngine.whyNotFound(System.getenv()));
             return ExitCodes.SIMULATION;
         }
-        Map<String, org.ringsweep.runner.results.ResultRecord> results = new LinkedHashMap<>();
-        Map<String, StoredRow> rows = new LinkedHashMap<>();
-        for (StoredRow r : store.rows()) {
-            rows.put(r.netHash() + "|" + r.pointKey(), r);
-        }
-        List<BatchRunner.Task> chosen = new ArrayList<>();
-        Map<BatchRunner.Task, Double> swings = new java.util.HashMap<>();
         PointRunner checker = new PointRunner(elaborator, null, Optional.empty(), common.out, timeout);
-        for (SweepPlanner.Plan plan : plans) {
-            for (PointRunner.PointSpec p : plan.points()) {
-                String key = PointKey.of(p.corner(), p.swept());
-                StoredRow row = rows.get(plan.net().sourceHash() + "|" + key);
-                if (row != null && org.ringsweep.runner.batch.Verification.chosen(plan.net().sourceHash(), key, share)) {
-                    BatchRunner.Task t = new BatchRunner.Task(plan.net(), p, key);
-                    chosen.add(t);
-                    results.put(key, org.ringsweep.runner.report.Reports.parseRecord(row.recordJson(), store.file().toString()));
-                    swings.put(t, checker.elaborate(plan.net(), p).swing());
-                }
-            }
-        }
         PointRunner reference = new PointRunner(elaborator, decks, Optional.of(ngspice.get()), common.out.resolve("verify"), timeout,
                 registry.checks());
-        org.ringsweep.runner.batch.Verification.Report report =
-                org.ringsweep.runner.batch.Verification.run(chosen, results, reference, swings::get);
+        // the chosen points follow from their keys (a stable hash), taken one at a time from the plan;
+        // each is compared and, when flagged, its stored record rewritten at once: nothing is gathered
+        Iterator<BatchRunner.Task> chosen = tasks(plans, (plan, key) -> Verification.chosen(plan.net().sourceHash(), key, share));
+        Verification.Report report = Verification.run(chosen,
+                t -> store.row(t.net().sourceHash(), t.pointKey())
+                        .map(row -> org.ringsweep.runner.report.Reports.parseRecord(row.recordJson(), store.file().toString())),
+                reference, t -> checker.elaborate(t.net(), t.spec()).swing(),
+                (t, r, why) -> {
+                    List<String> warnings = new ArrayList<>(r.warnings());
+                    warnings.add("verification against ngspice differs beyond tolerance: " + why);
+                    store.put(new org.ringsweep.runner.results.ResultRecord(r.net(), r.corner(), r.point(), r.engineName(),
+                            r.engineVersion(), r.verdict(), r.receivers(), r.deck(), r.error(), r.source(), r.sourceHash(),
+                            r.defaulted(), warnings), t.pointKey());
+                });
         out.printf(Locale.ROOT, "Verification against ngspice: %d point(s) re-simulated (%s of the sweep)%n", report.compared(), verify);
         report.worst().values().forEach(w -> out.printf(Locale.ROOT, "  largest difference %-10s %.4g%s%n", w.metric(), w.difference(),
                 w.beyondTolerance() ? "  BEYOND TOLERANCE <<" : ""));
         for (Map.Entry<String, String> f : report.flagged().entrySet()) {
             out.println("  FLAGGED " + f.getKey() + ": " + f.getValue());
-            org.ringsweep.runner.results.ResultRecord r = results.get(f.getKey());
-            List<String> warnings = new ArrayList<>(r.warnings());
-            warnings.add("verification against ngspice differs beyond tolerance: " + f.getValue());
-            store.put(new org.ringsweep.runner.results.ResultRecord(r.net(), r.corner(), r.point(), r.engineName(), r.engineVersion(),
-                    r.verdict(), r.receivers(), r.deck(), r.error(), r.source(), r.sourceHash(), r.defaulted(), warnings), f.getKey());
+        }
+        if (report.flaggedCount() > report.flagged().size()) {
+            out.println("  ... " + (report.flaggedCount() - report.flagged().size()) + " more flagged point(s): their records say so");
         }
         return ExitCodes.OK;
     }
 
-    /** results.jsonl beside the store: every record, for tools that read JSON Lines. */
-    private void writeJsonLines(List<StoredRow> rows) {
-        StringBuilder b = new StringBuilder();
-        StoreExport.toJsonLines(rows, b);
-        try {
-            Files.writeString(common.out.resolve("results.jsonl"), b, StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + common.out.resolve("results.jsonl") + ": " + e.getMessage(), e);
+    /** results.jsonl beside the store: every record, for tools that read JSON Lines; streamed row by row. */
+    private void writeJsonLines(ResultStore store) {
+        Path file = common.out.resolve("results.jsonl");
+        try (java.io.Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
+            store.forEachRecordLine(line -> {
+                try {
+                    w.write(line);
+                    w.write('\n');
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
+        } catch (IOException | UncheckedIOException e) {
+            String why = e instanceof UncheckedIOException u ? u.getCause().getMessage() : e.getMessage();
+            throw new UncheckedIOException("cannot write " + file + ": " + why, e instanceof IOException io ? io : ((UncheckedIOException) e).getCause());
         }
     }
 
-    private static int exitCode(List<StoredRow> rows, List<SweepPlanner.Plan> plans) {
-        Set<String> hashes = new java.util.HashSet<>();
-        plans.forEach(p -> hashes.add(p.net().sourceHash()));
+    /** Net name → pass, fail, error counts over the plans' net files, nets in the order of their first row (SQL counts). */
+    private static Map<String, long[]> counts(ResultStore store, List<SweepPlanner.Plan> plans) {
+        Map<String, long[]> counts = new LinkedHashMap<>();
+        plans.stream().map(p -> p.net().sourceHash()).distinct().forEach(hash -> store.counts(hash).forEach((net, c) -> {
+            long[] sum = counts.computeIfAbsent(net, k -> new long[3]);
+            sum[0] += c.pass();
+            sum[1] += c.fail();
+            sum[2] += c.error();
+        }));
+        return counts;
+    }
+
+    private static int exitCode(Map<String, long[]> counts) {
         Verdict worst = Verdict.PASS;
-        for (StoredRow r : rows) {
-            if (hashes.contains(r.netHash())) {
-                worst = worst.worst(r.verdict());
-            }
+        for (long[] c : counts.values()) {
+            worst = worst.worst(c[2] > 0 ? Verdict.ERROR : c[1] > 0 ? Verdict.FAIL : Verdict.PASS);
         }
         return switch (worst) {
             case PASS -> ExitCodes.OK;
@@ -313,38 +387,37 @@ public final class SweepCommand implements Callable<Integer> {
         };
     }
 
-    /** Per net: pass/fail/error counts, the best point by the default objective, and each point's key metrics. */
-    private static void summary(ResultStore store, List<SweepPlanner.Plan> plans, PrintWriter out) {
+    /** Rows of the per-point table per net; the rest is in the store ({@code ringsweep results OUT_DIR --csv}). */
+    static final int SUMMARY_ROWS = 60;
+
+    /**
+     * Per net: pass/fail/error counts, the best point by the default objective, and the first
+     * {@value #SUMMARY_ROWS} points by point key with their key metrics. Counts come from SQL, the
+     * best point from one cursor pass, the table from an SQL {@code ORDER BY ... LIMIT}: bounded
+     * memory whatever the sweep's size.
+     */
+    private static void summary(ResultStore store, List<SweepPlanner.Plan> plans, Map<String, long[]> counts, PrintWriter out) {
         Map<String, StoredRow> best = store.bestPerNet();
-        Map<String, List<StoredRow>> byNet = new LinkedHashMap<>();
-        Set<String> hashes = new java.util.HashSet<>();
-        plans.forEach(p -> hashes.add(p.net().sourceHash()));
-        for (StoredRow r : store.rows()) {
-            if (hashes.contains(r.netHash())) {
-                byNet.computeIfAbsent(r.net(), k -> new ArrayList<>()).add(r);
-            }
-        }
         out.println();
-        for (Map.Entry<String, List<StoredRow>> e : byNet.entrySet()) {
-            List<StoredRow> rows = new ArrayList<>(e.getValue());
-            rows.sort(java.util.Comparator.comparing(StoredRow::pointKey));
-            long pass = rows.stream().filter(r -> r.verdict() == Verdict.PASS).count();
-            long fail = rows.stream().filter(r -> r.verdict() == Verdict.FAIL).count();
-            long error = rows.size() - pass - fail;
-            out.printf(Locale.ROOT, "%s: %d point(s), %d pass, %d fail, %d error%n", e.getKey(), rows.size(), pass, fail, error);
+        for (Map.Entry<String, long[]> e : counts.entrySet()) {
+            long[] c = e.getValue();
+            long all = c[0] + c[1] + c[2];
+            out.printf(Locale.ROOT, "%s: %d point(s), %d pass, %d fail, %d error%n", e.getKey(), all, c[0], c[1], c[2]);
             StoredRow b = best.get(e.getKey());
             out.println("  best (" + org.ringsweep.runner.tune.Objective.DESCRIPTION + "): "
                     + (b == null ? "none (every point is an error)" : b.pointKey() + " -> " + b.verdict().word()));
             out.printf(Locale.ROOT, "  %-48s %-7s %10s %10s %12s%n", "POINT", "VERDICT", "EXCURSION", "RINGBACK", "SETTLE");
-            int shown = 0;
-            for (StoredRow r : rows) {
-                if (shown++ == 60) {
-                    out.println("  ... (" + (rows.size() - 60) + " more: ringsweep results OUT_DIR --csv)");
-                    break;
-                }
+            List<StoredRow> rows = new ArrayList<>();
+            plans.stream().map(p -> p.net().sourceHash()).distinct()
+                    .forEach(hash -> rows.addAll(store.firstByPointKey(e.getKey(), hash, SUMMARY_ROWS)));
+            rows.sort(java.util.Comparator.comparing(StoredRow::pointKey));
+            for (StoredRow r : rows.subList(0, (int) Math.min(rows.size(), SUMMARY_ROWS))) {
                 out.printf(Locale.ROOT, "  %-48s %-7s %10s %10s %12s%s%n", r.pointKey(), r.verdict() == Verdict.PASS ? "pass" : r.verdict().word().toUpperCase(Locale.ROOT),
                         ResultTable.volts(r.worstExcursionV()), ResultTable.volts(r.worstRingbackMarginV()),
-                        ResultTable.seconds(r.longestSettleS()), r == b ? "  << best" : "");
+                        ResultTable.seconds(r.longestSettleS()), b != null && r.id() == b.id() ? "  << best" : "");
+            }
+            if (all > SUMMARY_ROWS) {
+                out.println("  ... (" + (all - SUMMARY_ROWS) + " more: ringsweep results OUT_DIR --csv)");
             }
         }
         out.println();

@@ -1,5 +1,7 @@
 package org.ringsweep.runner.report;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.time.Instant;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
@@ -11,6 +13,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.function.Consumer;
 import org.ringsweep.runner.check.Caution;
 import org.ringsweep.runner.results.EdgeResult;
 import org.ringsweep.runner.results.ReceiverResult;
@@ -53,6 +56,18 @@ public final class JunitXml {
     }
 
     /**
+     * The records of one net (one {@code <testsuite>}), walked as often as the writer asks: twice,
+     * once to count the suite's cases for its attributes and once to write them.
+     */
+    public interface NetRecords {
+        /** The net name. */
+        String net();
+
+        /** Hands every record of the net to {@code action}, in run order. */
+        void forEach(Consumer<ResultRecord> action);
+    }
+
+    /**
      * The JUnit XML document.
      *
      * @param suiteName        name of the {@code <testsuites>} root, e.g. {@code ringsweep check}
@@ -70,59 +85,142 @@ public final class JunitXml {
         for (ResultRecord r : records) {
             byNet.computeIfAbsent(r.net(), k -> new ArrayList<>()).add(r);
         }
-        List<String> suites = new ArrayList<>();
-        int tests = 0;
-        int failures = 0;
-        int errors = 0;
-        for (Map.Entry<String, List<ResultRecord>> e : byNet.entrySet()) {
-            Suite s = suite(e.getKey(), e.getValue(), expectedCases.get(e.getKey()), ringsweepVersion, timestamp);
-            suites.add(s.xml());
-            tests += s.tests();
-            failures += s.failures();
-            errors += s.errors();
-        }
-        StringBuilder b = new StringBuilder("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
-        b.append("<testsuites name=\"").append(Xml.escape(suiteName)).append("\" tests=\"").append(tests)
-                .append("\" failures=\"").append(failures).append("\" errors=\"").append(errors).append("\" time=\"0\">\n");
-        suites.forEach(b::append);
-        b.append("</testsuites>\n");
+        List<NetRecords> nets = new ArrayList<>();
+        byNet.forEach((net, rs) -> nets.add(new NetRecords() {
+            @Override
+            public String net() {
+                return net;
+            }
+
+            @Override
+            public void forEach(Consumer<ResultRecord> action) {
+                rs.forEach(action);
+            }
+        }));
+        StringBuilder b = new StringBuilder();
+        write(b, suiteName, nets, expectedCases, ringsweepVersion, timestamp);
         return b.toString();
     }
 
-    private record Suite(String xml, int tests, int failures, int errors) {
-    }
-
-    private static Suite suite(String net, List<ResultRecord> records, List<String> expected, String version, Instant timestamp) {
-        StringBuilder cases = new StringBuilder();
+    /**
+     * Writes the JUnit XML document to {@code out} as it goes: each net's records are walked
+     * twice (counts, then cases), so memory does not grow with the number of records.
+     *
+     * @param nets the nets in suite order; a net without records gives no suite
+     * @throws UncheckedIOException when {@code out} fails
+     * @see #write(String, List, Map, String, Instant)
+     */
+    public static void write(Appendable out, String suiteName, List<NetRecords> nets, Map<String, List<String>> expectedCases,
+                             String ringsweepVersion, Instant timestamp) {
+        List<Counts> counts = new ArrayList<>();
         int tests = 0;
         int failures = 0;
         int errors = 0;
-        for (ResultRecord r : records) {
+        for (NetRecords n : nets) {
+            Counts c = new Counts();
+            List<String> expected = expectedCases.get(n.net());
+            Appendable none = new NullAppendable();
+            n.forEach(r -> {
+                c.first = c.first == null ? r : c.first;
+                c.engines.add(r.engineName());
+                c.engineVersions.add(r.engineVersion());
+                cases(r, expected, none, c);
+            });
+            counts.add(c);
+            tests += c.tests;
+            failures += c.failures;
+            errors += c.errors;
+        }
+        try {
+            out.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
+            out.append("<testsuites name=\"").append(Xml.escape(suiteName)).append("\" tests=\"").append(String.valueOf(tests))
+                    .append("\" failures=\"").append(String.valueOf(failures)).append("\" errors=\"").append(String.valueOf(errors))
+                    .append("\" time=\"0\">\n");
+            for (int i = 0; i < nets.size(); i++) {
+                Counts c = counts.get(i);
+                if (c.first == null) {
+                    continue;
+                }
+                NetRecords n = nets.get(i);
+                StringBuilder b = new StringBuilder();
+                b.append("  <testsuite name=\"").append(Xml.escape(n.net())).append("\" tests=\"").append(c.tests).append("\" failures=\"")
+                        .append(c.failures).append("\" errors=\"").append(c.errors).append("\" skipped=\"0\" time=\"0\" timestamp=\"")
+                        .append(TIMESTAMP.format(timestamp)).append("\">\n    <properties>\n");
+                property(b, "engine", String.join(", ", c.engines));
+                property(b, "engine.version", String.join(", ", c.engineVersions));
+                property(b, "ringsweep.version", ringsweepVersion);
+                property(b, "source", c.first.source());
+                property(b, "source_hash", c.first.sourceHash());
+                b.append("    </properties>\n");
+                out.append(b);
+                List<String> expected = expectedCases.get(n.net());
+                Counts ignored = new Counts();
+                n.forEach(r -> cases(r, expected, out, ignored));
+                out.append("    <system-out>").append(Xml.escape(Caution.TEXT)).append("</system-out>\n");
+                out.append("  </testsuite>\n");
+            }
+            out.append("</testsuites>\n");
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the JUnit XML report: " + e.getMessage(), e);
+        }
+    }
+
+    /** A suite's counts and properties, gathered on the first walk. */
+    private static final class Counts {
+        int tests;
+        int failures;
+        int errors;
+        ResultRecord first;
+        final Set<String> engines = new LinkedHashSet<>();
+        final Set<String> engineVersions = new LinkedHashSet<>();
+    }
+
+    /** Discards what is written: the counting walk. */
+    private static final class NullAppendable implements Appendable {
+        @Override
+        public Appendable append(CharSequence csq) {
+            return this;
+        }
+
+        @Override
+        public Appendable append(CharSequence csq, int start, int end) {
+            return this;
+        }
+
+        @Override
+        public Appendable append(char c) {
+            return this;
+        }
+    }
+
+    /** The test cases of one record, appended to {@code out} and counted in {@code c}. */
+    private static void cases(ResultRecord r, List<String> expected, Appendable out, Counts c) {
+        try {
             String classname = classname(r);
             if (r.verdict() == Verdict.ERROR || r.receivers().isEmpty()) {
                 String message = r.error().isEmpty() ? "no usable waveform" : r.error();
                 for (String name : expected == null || expected.isEmpty() ? List.of("simulation") : expected) {
-                    cases.append("    <testcase name=\"").append(Xml.escape(name)).append("\" classname=\"").append(Xml.escape(classname))
+                    out.append("    <testcase name=\"").append(Xml.escape(name)).append("\" classname=\"").append(Xml.escape(classname))
                             .append("\" time=\"0\">\n      <error message=\"").append(Xml.escape(message)).append("\" type=\"simulation\">")
                             .append(Xml.escape(message)).append("</error>\n    </testcase>\n");
-                    tests++;
-                    errors++;
+                    c.tests++;
+                    c.errors++;
                 }
-                continue;
+                return;
             }
             for (ReceiverResult rr : r.receivers()) {
                 Set<String> edges = new LinkedHashSet<>(rr.edges().keySet());
                 rr.violations().forEach(v -> edges.add(v.edge()));
                 for (String edge : edges) {
                     List<ViolationRecord> vs = rr.violations().stream().filter(v -> v.edge().equals(edge)).toList();
-                    cases.append("    <testcase name=\"").append(Xml.escape(rr.pin() + " " + edge)).append("\" classname=\"")
+                    out.append("    <testcase name=\"").append(Xml.escape(rr.pin() + " " + edge)).append("\" classname=\"")
                             .append(Xml.escape(classname)).append("\" time=\"0\"");
-                    tests++;
+                    c.tests++;
                     if (vs.isEmpty()) {
-                        cases.append("/>\n");
+                        out.append("/>\n");
                         continue;
                     }
-                    failures++;
+                    c.failures++;
                     String message = String.join("; ", vs.stream().map(Format::violation).toList());
                     StringBuilder text = new StringBuilder();
                     for (ViolationRecord v : vs) {
@@ -132,32 +230,14 @@ public final class JunitXml {
                     if (er != null) {
                         text.append("measured: ").append(er.metrics()).append('\n');
                     }
-                    cases.append(">\n      <failure message=\"").append(Xml.escape(message)).append("\" type=\"")
+                    out.append(">\n      <failure message=\"").append(Xml.escape(message)).append("\" type=\"")
                             .append(Xml.escape(vs.get(0).limit())).append("\">").append(Xml.escape(text.toString()))
                             .append("</failure>\n    </testcase>\n");
                 }
             }
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the JUnit XML report: " + e.getMessage(), e);
         }
-        ResultRecord first = records.get(0);
-        Set<String> engines = new LinkedHashSet<>();
-        Set<String> engineVersions = new LinkedHashSet<>();
-        for (ResultRecord r : records) {
-            engines.add(r.engineName());
-            engineVersions.add(r.engineVersion());
-        }
-        StringBuilder b = new StringBuilder();
-        b.append("  <testsuite name=\"").append(Xml.escape(net)).append("\" tests=\"").append(tests).append("\" failures=\"")
-                .append(failures).append("\" errors=\"").append(errors).append("\" skipped=\"0\" time=\"0\" timestamp=\"")
-                .append(TIMESTAMP.format(timestamp)).append("\">\n    <properties>\n");
-        property(b, "engine", String.join(", ", engines));
-        property(b, "engine.version", String.join(", ", engineVersions));
-        property(b, "ringsweep.version", version);
-        property(b, "source", first.source());
-        property(b, "source_hash", first.sourceHash());
-        b.append("    </properties>\n").append(cases);
-        b.append("    <system-out>").append(Xml.escape(Caution.TEXT)).append("</system-out>\n");
-        b.append("  </testsuite>\n");
-        return new Suite(b.toString(), tests, failures, errors);
     }
 
     private static void property(StringBuilder b, String name, String value) {

@@ -7,12 +7,13 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Instant;
 import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.HashSet;
 import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.ringsweep.runner.results.ResultRecord;
 import org.ringsweep.runner.results.Verdict;
 import org.ringsweep.runner.store.PointKey;
@@ -78,7 +79,7 @@ public final class Reports {
      * @throws ReportException when a file cannot be written or a stored record cannot be read
      */
     public static Written afterSweep(Path outDir, ResultStore store) {
-        return write(outDir, fromStore(store), List.of());
+        return fromStore(outDir, store, List.of());
     }
 
     /**
@@ -114,7 +115,7 @@ public final class Reports {
     public static Written rebuild(Path outDir, List<String> sets) {
         if (Files.isRegularFile(outDir.resolve(ResultStore.FILE_NAME))) {
             try (ResultStore store = ResultStore.open(outDir)) {
-                return write(outDir, fromStore(store), sets);
+                return fromStore(outDir, store, sets);
             }
         }
         Path jsonl = outDir.resolve(RECORDS_FILE);
@@ -142,24 +143,76 @@ public final class Reports {
         return write(outDir, new ReportRun(ReportRun.Kind.SWEEP, records, bestKeys, List.of("Rebuilt from " + RECORDS_FILE + "."), null), sets);
     }
 
-    private static ReportRun fromStore(ResultStore store) {
-        List<StoredRow> rows = store.rows();
-        Map<String, String> latestHash = new HashMap<>();
-        rows.forEach(r -> latestHash.put(r.net(), r.netHash()));
+    /**
+     * The most points of one net a sweep report draws before it samples them (the HTML report
+     * holds its records in memory; {@code junit.xml} always streams every point).
+     */
+    static final int POINTS_PER_NET = 1_000;
+
+    /**
+     * The sweep report of a store, in bounded memory: per net (its latest file), every point
+     * when it has at most {@link #POINTS_PER_NET}; else every k-th point in run order plus the
+     * best point and the notable ones ({@link ResultStore#notableIds}: the worst of each summary
+     * metric, the first fail and error), with a note saying so. {@code junit.xml} gets every
+     * point, streamed from the store.
+     */
+    private static Written fromStore(Path outDir, ResultStore store, List<String> sets) {
+        Map<String, String> latest = store.latestFiles();
+        Map<String, StoredRow> bestRows = store.bestPerNet();
         List<ResultRecord> records = new ArrayList<>();
-        int older = 0;
-        for (StoredRow row : rows) {
-            if (row.netHash().equals(latestHash.get(row.net()))) {
-                records.add(RecordReader.parse(row.recordJson(), store.file() + " row " + row.id()));
-            } else {
-                older++;
+        List<String> notes = new ArrayList<>();
+        List<JunitXml.NetRecords> junit = new ArrayList<>();
+        long inLatest = 0;
+        for (Map.Entry<String, String> file : latest.entrySet()) {
+            String net = file.getKey();
+            String hash = file.getValue();
+            long n = store.counts(hash).get(net).total();
+            inLatest += n;
+            long stride = (n + POINTS_PER_NET - 1) / POINTS_PER_NET;
+            Set<Long> keep = new HashSet<>();
+            if (stride > 1) {
+                keep.addAll(store.notableIds(net, hash));
+                StoredRow best = bestRows.get(net);
+                if (best != null) {
+                    keep.add(best.id());
+                }
             }
+            long[] index = {0};
+            int before = records.size();
+            store.rowsOf(hash).forEach(row -> {
+                if (row.net().equals(net) && (index[0]++ % stride == 0 || keep.contains(row.id()))) {
+                    records.add(RecordReader.parse(row.recordJson(), store.file() + " row " + row.id()));
+                }
+            });
+            if (stride > 1) {
+                notes.add("Net " + net + " has " + n + " points: this report draws " + (records.size() - before) + " of them (one in every "
+                        + stride + " in run order, the best point, the worst of each metric and the first fail and error point);"
+                        + " its counts and tables are over those. " + JUNIT_FILE + " and " + ResultStore.FILE_NAME
+                        + " hold every point (ringsweep results OUT_DIR --csv).");
+            }
+            junit.add(new JunitXml.NetRecords() {
+                @Override
+                public String net() {
+                    return net;
+                }
+
+                @Override
+                public void forEach(java.util.function.Consumer<ResultRecord> action) {
+                    store.rowsOf(hash).forEach(row -> {
+                        if (row.net().equals(net)) {
+                            action.accept(RecordReader.parse(row.recordJson(), store.file() + " row " + row.id()));
+                        }
+                    });
+                }
+            });
+        }
+        long older = store.size() - inLatest;
+        if (older > 0) {
+            notes.add(0, older + " stored point(s) of earlier versions of the net files are left out; only each net's latest file counts.");
         }
         Map<String, String> best = new LinkedHashMap<>();
-        store.bestPerNet().forEach((net, row) -> best.put(net, row.pointKey()));
-        List<String> notes = older == 0 ? List.of()
-                : List.of(older + " stored point(s) of earlier versions of the net files are left out; only each net's latest file counts.");
-        return new ReportRun(ReportRun.Kind.SWEEP, records, best, notes, null);
+        bestRows.forEach((net, row) -> best.put(net, row.pointKey()));
+        return write(outDir, new ReportRun(ReportRun.Kind.SWEEP, records, best, notes, null), sets, junit);
     }
 
     private static List<ResultRecord> distinct(List<ResultRecord> records) {
@@ -174,10 +227,20 @@ public final class Reports {
     }
 
     static Written write(Path outDir, ReportRun run, List<String> sets) {
-        return write(outDir, run, sets, HtmlReport.Options.DEFAULT, Instant.now());
+        return write(outDir, run, sets, null);
+    }
+
+    /** @param junit the JUnit suites streamed from a store, or null to write them from the run's records */
+    private static Written write(Path outDir, ReportRun run, List<String> sets, List<JunitXml.NetRecords> junit) {
+        return write(outDir, run, sets, HtmlReport.Options.DEFAULT, Instant.now(), junit);
     }
 
     static Written write(Path outDir, ReportRun run, List<String> sets, HtmlReport.Options options, Instant when) {
+        return write(outDir, run, sets, options, when, null);
+    }
+
+    private static Written write(Path outDir, ReportRun run, List<String> sets, HtmlReport.Options options, Instant when,
+                                 List<JunitXml.NetRecords> junit) {
         ContextResolver resolver = new ContextResolver(sets);
         Map<ResultRecord, ContextResolver.Resolved> contexts = new IdentityHashMap<>();
         Map<String, List<String>> expected = new LinkedHashMap<>();
@@ -197,20 +260,39 @@ public final class Reports {
         }
         String version = version();
         String html = HtmlReport.render(run, contexts, outDir, options, version, when);
-        String junit = JunitXml.write("ringsweep " + run.kind().word, run.records(), expected, version, when);
         Path htmlFile = outDir.resolve(HTML_FILE);
         Path junitFile = outDir.resolve(JUNIT_FILE);
         writeFile(htmlFile, html);
-        writeFile(junitFile, junit);
+        String suiteName = "ringsweep " + run.kind().word;
+        if (junit == null) {
+            writeFile(junitFile, JunitXml.write(suiteName, run.records(), expected, version, when));
+        } else {
+            writeFile(junitFile, out -> JunitXml.write(out, suiteName, junit, expected, version, when));
+        }
         return new Written(htmlFile, junitFile, new ArrayList<>(notes));
     }
 
     /** Writes through a temporary file and a move, so a reader never sees half a report. */
     private static void writeFile(Path file, String text) {
+        writeFile(file, out -> {
+            try {
+                out.append(text);
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        });
+    }
+
+    /** As {@link #writeFile(Path, String)}, the text written by {@code body} as it goes (buffered, UTF-8). */
+    private static void writeFile(Path file, java.util.function.Consumer<Appendable> body) {
         try {
             Files.createDirectories(file.toAbsolutePath().getParent());
             Path tmp = file.resolveSibling(file.getFileName() + ".tmp");
-            Files.writeString(tmp, text, StandardCharsets.UTF_8);
+            try (java.io.Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
+                body.accept(w);
+            } catch (java.io.UncheckedIOException e) {
+                throw e.getCause();
+            }
             Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         } catch (IOException e) {
             throw new ReportException("cannot write `" + file + "`: " + e.getMessage(), e);

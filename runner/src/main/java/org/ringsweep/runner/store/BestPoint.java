@@ -24,12 +24,34 @@ import org.ringsweep.runner.tune.Objective;
  * after every known one.
  */
 final class BestPoint {
+    /**
+     * What the objective looks at of one row; {@code point} may be null, then it is read from
+     * the point key when a tie needs it ({@link PointKey#values}).
+     */
+    record Candidate(long id, String corner, String pointKey, Verdict verdict, double worstExcursionV, double longestSettleS,
+                     Map<String, Double> point) {
+        Candidate(long id, String corner, String pointKey, Verdict verdict, double worstExcursionV, double longestSettleS) {
+            this(id, corner, pointKey, verdict, worstExcursionV, longestSettleS, null);
+        }
+
+        static Candidate of(StoredRow r) {
+            return new Candidate(r.id(), r.corner(), r.pointKey(), r.verdict(), r.worstExcursionV(), r.longestSettleS(), r.point());
+        }
+
+        Map<String, Double> values() {
+            return point != null ? point : PointKey.values(pointKey);
+        }
+    }
+
     /** Best first. */
-    static final Comparator<StoredRow> ORDER = Comparator
-            .comparingInt((StoredRow r) -> r.verdict() == Verdict.PASS ? 0 : 1)
-            .thenComparing((StoredRow r) -> Objective.excursionSteps(r.worstExcursionV()), BestPoint::knownFirst)
-            .thenComparing(StoredRow::longestSettleS, BestPoint::knownFirst)
+    static final Comparator<Candidate> CANDIDATE_ORDER = Comparator
+            .comparingInt((Candidate r) -> r.verdict() == Verdict.PASS ? 0 : 1)
+            .thenComparing((Candidate r) -> Objective.excursionSteps(r.worstExcursionV()), BestPoint::knownFirst)
+            .thenComparing(Candidate::longestSettleS, BestPoint::knownFirst)
             .thenComparing(BestPoint::pointOrder);
+
+    /** Best first, over whole rows. */
+    static final Comparator<StoredRow> ORDER = Comparator.comparing(Candidate::of, CANDIDATE_ORDER);
 
     private BestPoint() {
     }
@@ -43,13 +65,13 @@ final class BestPoint {
         return Double.compare(a, b);
     }
 
-    static int pointOrder(StoredRow a, StoredRow b) {
+    static int pointOrder(Candidate a, Candidate b) {
         int c = a.corner().compareTo(b.corner());
         if (c != 0) {
             return c;
         }
-        Iterator<Map.Entry<String, Double>> ia = new TreeMap<>(a.point()).entrySet().iterator();
-        Iterator<Map.Entry<String, Double>> ib = new TreeMap<>(b.point()).entrySet().iterator();
+        Iterator<Map.Entry<String, Double>> ia = new TreeMap<>(a.values()).entrySet().iterator();
+        Iterator<Map.Entry<String, Double>> ib = new TreeMap<>(b.values()).entrySet().iterator();
         while (ia.hasNext() && ib.hasNext()) {
             Map.Entry<String, Double> ea = ia.next();
             Map.Entry<String, Double> eb = ib.next();

@@ -40,6 +40,45 @@ public final class PointKey {
         return of(r.corner(), r.point());
     }
 
+    /**
+     * The swept values a key holds (the inverse of {@link #of} for the values): path → value,
+     * paths in key order. {@code Double.toString} text parses back to the same double, so the
+     * values are the record's exactly.
+     *
+     * @throws IllegalArgumentException when the text is not a point key
+     */
+    public static Map<String, Double> values(String key) {
+        if (!key.startsWith("corner=")) {
+            throw new IllegalArgumentException("not a point key: `" + key + "`");
+        }
+        Map<String, Double> out = new java.util.LinkedHashMap<>();
+        String[] parts = key.split(";", -1);
+        for (int i = 1; i < parts.length; i++) {
+            int eq = parts[i].lastIndexOf('=');
+            if (eq < 0) {
+                throw new IllegalArgumentException("not a point key: `" + key + "`");
+            }
+            out.put(unescape(parts[i].substring(0, eq)), Double.parseDouble(parts[i].substring(eq + 1)));
+        }
+        return out;
+    }
+
+    private static String unescape(String s) {
+        if (s.indexOf('%') < 0) {
+            return s;
+        }
+        StringBuilder b = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            if (s.startsWith("%25", i) || s.startsWith("%3B", i) || s.startsWith("%3D", i)) {
+                b.append(s.charAt(i + 2) == '5' ? '%' : s.charAt(i + 2) == 'B' ? ';' : '=');
+                i += 2;
+            } else {
+                b.append(s.charAt(i));
+            }
+        }
+        return b.toString();
+    }
+
     private static String escape(String s) {
         if (s.indexOf('%') < 0 && s.indexOf(';') < 0 && s.indexOf('=') < 0) {
             return s;

@@ -196,7 +196,8 @@ public final class ResultStore implements AutoCloseable {
     }
 
     /**
-     * The keys of the finished points of one net file, in the order they were written.
+     * The keys of the finished points of one net file, in the order they were written. Holds
+     * every key as a string: for a large store use {@link #finished(String)}.
      *
      * @param netHash the net file's SHA-256
      * @return an unmodifiable set, empty when none
@@ -204,17 +205,43 @@ public final class ResultStore implements AutoCloseable {
     public synchronized Set<String> finishedKeys(String netHash) {
         ensureOpen();
         Set<String> keys = new LinkedHashSet<>();
+        forEachKey(netHash, keys::add);
+        return Collections.unmodifiableSet(keys);
+    }
+
+    /**
+     * The finished points of one net file as a compact, exact membership test for
+     * {@code --resume}: 8 bytes per stored point (a sorted array of 64-bit key hashes) instead
+     * of the keys themselves; a hash that matches is confirmed against the store's own
+     * {@code UNIQUE} index, so a hash collision never skips a point.
+     *
+     * @param netHash the net file's SHA-256
+     * @return a snapshot taken now; points written later are not in it
+     */
+    public synchronized FinishedPoints finished(String netHash) {
+        ensureOpen();
+        long[][] hashes = {new long[1024]};
+        int[] n = {0};
+        forEachKey(netHash, key -> {
+            if (n[0] == hashes[0].length) {
+                hashes[0] = java.util.Arrays.copyOf(hashes[0], hashes[0].length * 2);
+            }
+            hashes[0][n[0]++] = FinishedPoints.hash(key);
+        });
+        return new FinishedPoints(netHash, java.util.Arrays.copyOf(hashes[0], n[0]), this);
+    }
+
+    private void forEachKey(String netHash, java.util.function.Consumer<String> action) {
         try (PreparedStatement q = connection.prepareStatement("SELECT point_key FROM points WHERE net_hash = ? ORDER BY id")) {
             q.setString(1, netHash);
             try (ResultSet rs = q.executeQuery()) {
                 while (rs.next()) {
-                    keys.add(rs.getString(1));
+                    action.accept(rs.getString(1));
                 }
             }
         } catch (SQLException e) {
             throw failure("read", e);
         }
-        return Collections.unmodifiableSet(keys);
     }
 
     /**
@@ -272,32 +299,105 @@ public final class ResultStore implements AutoCloseable {
         }
     }
 
-    /** Every stored record as one line of JSON ({@code ringsweep/result-1}), in the order written. */
-    public synchronized List<String> recordLines() {
-        ensureOpen();
+    /** Every stored record as one line of JSON ({@code ringsweep/result-1}), in the order written; all in memory (small stores). */
+    public List<String> recordLines() {
         List<String> lines = new ArrayList<>();
-        try (Statement s = connection.createStatement(); ResultSet rs = s.executeQuery("SELECT record_json FROM points ORDER BY id")) {
-            while (rs.next()) {
-                lines.add(rs.getString(1));
-            }
-        } catch (SQLException e) {
-            throw failure("read", e);
-        }
+        forEachRecordLine(lines::add);
         return List.copyOf(lines);
     }
 
-    /** Every row, in the order written (all net hashes). */
-    public synchronized List<StoredRow> rows() {
+    /**
+     * Hands every stored record, one line of JSON, to {@code action} in the order written, one
+     * row at a time from a forward-only cursor: memory stays bounded whatever the store holds.
+     * The store is locked meanwhile; {@code action} must not write to it.
+     */
+    public synchronized void forEachRecordLine(java.util.function.Consumer<String> action) {
         ensureOpen();
-        List<StoredRow> rows = new ArrayList<>();
-        try (Statement s = connection.createStatement(); ResultSet rs = s.executeQuery("SELECT " + COLUMNS + " FROM points ORDER BY id")) {
+        try (Statement s = cursor(); ResultSet rs = s.executeQuery("SELECT record_json FROM points ORDER BY id")) {
             while (rs.next()) {
-                rows.add(row(rs));
+                action.accept(rs.getString(1));
             }
         } catch (SQLException e) {
             throw failure("read", e);
         }
+    }
+
+    /** Every row, in the order written (all net hashes); all in memory (small stores: see {@link #allRows()}). */
+    public List<StoredRow> rows() {
+        List<StoredRow> rows = new ArrayList<>();
+        allRows().forEach(rows::add);
         return List.copyOf(rows);
+    }
+
+    /** Every row in the order written, streamed from a cursor each time it is walked (see {@link #forEachRecordLine}). */
+    public RowSource allRows() {
+        return action -> query("SELECT " + COLUMNS + " FROM points ORDER BY id", List.of(), action);
+    }
+
+    /** The rows of one net file in the order written, streamed from a cursor each time it is walked. */
+    public RowSource rowsOf(String netHash) {
+        return action -> query("SELECT " + COLUMNS + " FROM points WHERE net_hash = ? ORDER BY id", List.of(netHash), action);
+    }
+
+    /**
+     * The first rows of one net name and file by point key (SQLite's binary text order, which is
+     * {@link String#compareTo} order for keys without characters beyond U+FFFF).
+     *
+     * @param limit the most rows returned
+     */
+    public List<StoredRow> firstByPointKey(String net, String netHash, int limit) {
+        List<StoredRow> rows = new ArrayList<>();
+        query("SELECT " + COLUMNS + " FROM points WHERE net = ? AND net_hash = ? ORDER BY point_key LIMIT " + limit,
+                List.of(net, netHash), rows::add);
+        return List.copyOf(rows);
+    }
+
+    /** The stored row of one point, if it is there. */
+    public java.util.Optional<StoredRow> row(String netHash, String pointKey) {
+        List<StoredRow> rows = new ArrayList<>(1);
+        query("SELECT " + COLUMNS + " FROM points WHERE net_hash = ? AND point_key = ?", List.of(netHash, pointKey), rows::add);
+        return rows.stream().findFirst();
+    }
+
+    /** Whether the store holds no row at all. */
+    public synchronized boolean isEmpty() {
+        ensureOpen();
+        try (Statement s = connection.createStatement(); ResultSet rs = s.executeQuery("SELECT 1 FROM points LIMIT 1")) {
+            return !rs.next();
+        } catch (SQLException e) {
+            throw failure("read", e);
+        }
+    }
+
+    /**
+     * Verdict counts of one net file's rows, counted by SQLite (nothing per row comes to Java).
+     *
+     * @return net name → counts, nets in the order of their first row
+     */
+    public synchronized Map<String, VerdictCounts> counts(String netHash) {
+        ensureOpen();
+        Map<String, long[]> raw = new HashMap<>(); // net → pass, fail, error, first id
+        try (PreparedStatement q = connection.prepareStatement(
+                "SELECT net, verdict, count(*), min(id) FROM points WHERE net_hash = ? GROUP BY net, verdict")) {
+            q.setString(1, netHash);
+            try (ResultSet rs = q.executeQuery()) {
+                while (rs.next()) {
+                    long[] c = raw.computeIfAbsent(rs.getString(1), k -> new long[] {0, 0, 0, Long.MAX_VALUE});
+                    c[Verdict.valueOf(rs.getString(2).toUpperCase(Locale.ROOT)).ordinal()] += rs.getLong(3);
+                    c[3] = Math.min(c[3], rs.getLong(4));
+                }
+            }
+        } catch (SQLException e) {
+            throw failure("read", e);
+        }
+        List<Map.Entry<String, long[]>> nets = new ArrayList<>(raw.entrySet());
+        nets.sort(java.util.Comparator.comparingLong(e -> e.getValue()[3]));
+        Map<String, VerdictCounts> out = new LinkedHashMap<>();
+        for (Map.Entry<String, long[]> e : nets) {
+            long[] c = e.getValue();
+            out.put(e.getKey(), new VerdictCounts(c[Verdict.PASS.ordinal()], c[Verdict.FAIL.ordinal()], c[Verdict.ERROR.ordinal()]));
+        }
+        return Collections.unmodifiableMap(out);
     }
 
     /**
@@ -306,28 +406,145 @@ public final class ResultStore implements AutoCloseable {
      * shortest longest settling time, then point order; error points are never best. Only the
      * net's latest net file counts: the hash of the row written last for that net name.
      *
+     * <p>One pass over a cursor of the summary columns, keeping one candidate per net (the
+     * point order is read from the point key, whose values are the record's exactly); only the
+     * winners' whole rows are read. Memory does not grow with the store.
+     *
      * @return net name → best row, nets in the order of their first row; a net whose latest file
      *         has only error points has no entry
      */
-    public Map<String, StoredRow> bestPerNet() {
-        List<StoredRow> all = rows();
-        Map<String, String> latestHash = new HashMap<>();
-        Map<String, StoredRow> best = new LinkedHashMap<>();
-        for (StoredRow r : all) {
-            latestHash.put(r.net(), r.netHash()); // rows come in id order: the last one wins
-            best.putIfAbsent(r.net(), null);
-        }
-        for (StoredRow r : all) {
-            if (r.verdict() == Verdict.ERROR || !r.netHash().equals(latestHash.get(r.net()))) {
-                continue;
+    public synchronized Map<String, StoredRow> bestPerNet() {
+        ensureOpen();
+        Map<String, String> latestHash = new LinkedHashMap<>();
+        Map<String, BestPoint.Candidate> best = new LinkedHashMap<>();
+        try (Statement s = connection.createStatement();
+             ResultSet rs = s.executeQuery("SELECT p.net, p.net_hash FROM points AS p JOIN (SELECT net, max(id) AS last, min(id) AS first"
+                     + " FROM points GROUP BY net) AS l ON p.id = l.last ORDER BY l.first")) {
+            while (rs.next()) {
+                latestHash.put(rs.getString(1), rs.getString(2));
+                best.put(rs.getString(1), null);
             }
-            StoredRow current = best.get(r.net());
-            if (current == null || BestPoint.ORDER.compare(r, current) < 0) {
-                best.put(r.net(), r);
+        } catch (SQLException e) {
+            throw failure("read", e);
+        }
+        try (PreparedStatement q = connection.prepareStatement("SELECT id, corner, point_key, verdict, worst_excursion_v, longest_settle_s"
+                + " FROM points WHERE net = ? AND net_hash = ? AND verdict <> 'error'")) {
+            for (Map.Entry<String, String> net : latestHash.entrySet()) {
+                q.setString(1, net.getKey());
+                q.setString(2, net.getValue());
+                try (ResultSet rs = q.executeQuery()) {
+                    while (rs.next()) {
+                        BestPoint.Candidate c = new BestPoint.Candidate(rs.getLong(1), rs.getString(2), rs.getString(3),
+                                Verdict.valueOf(rs.getString(4).toUpperCase(Locale.ROOT)), real(rs, 5), real(rs, 6));
+                        BestPoint.Candidate current = best.get(net.getKey());
+                        if (current == null || BestPoint.CANDIDATE_ORDER.compare(c, current) < 0) {
+                            best.put(net.getKey(), c);
+                        }
+                    }
+                }
+            }
+        } catch (SQLException e) {
+            throw failure("read", e);
+        }
+        Map<String, StoredRow> out = new LinkedHashMap<>();
+        best.forEach((net, c) -> {
+            if (c != null) {
+                query("SELECT " + COLUMNS + " FROM points WHERE id = ?", List.of(c.id()), r -> out.put(net, r));
+            }
+        });
+        return Collections.unmodifiableMap(out);
+    }
+
+    /**
+     * Each net's latest net file: the hash of the row written last for that net name.
+     *
+     * @return net name → net hash, nets in the order of the first row of that file
+     */
+    public synchronized Map<String, String> latestFiles() {
+        ensureOpen();
+        Map<String, String> out = new LinkedHashMap<>();
+        try (Statement s = connection.createStatement();
+             ResultSet rs = s.executeQuery("SELECT p.net, p.net_hash FROM points AS p JOIN (SELECT net, max(id) AS last FROM points"
+                     + " GROUP BY net) AS l ON p.id = l.last ORDER BY (SELECT min(id) FROM points AS q WHERE q.net_hash = p.net_hash"
+                     + " AND q.net = p.net)")) {
+            while (rs.next()) {
+                out.put(rs.getString(1), rs.getString(2));
+            }
+        } catch (SQLException e) {
+            throw failure("read", e);
+        }
+        return Collections.unmodifiableMap(out);
+    }
+
+    /** The number of rows (all net files). */
+    public synchronized long size() {
+        ensureOpen();
+        try (Statement s = connection.createStatement(); ResultSet rs = s.executeQuery("SELECT count(*) FROM points")) {
+            rs.next();
+            return rs.getLong(1);
+        } catch (SQLException e) {
+            throw failure("read", e);
+        }
+    }
+
+    /**
+     * The rows of one net file that a sampled report must not leave out: the worst of each
+     * summary column (largest overshoot, undershoot and settling time, smallest ringback
+     * margin), the first point whose settling time is unknown, and the first fail and error
+     * point. Found by SQLite, one scan of the net's rows each.
+     *
+     * @return their ids
+     */
+    public synchronized Set<Long> notableIds(String net, String netHash) {
+        ensureOpen();
+        Set<Long> ids = new LinkedHashSet<>();
+        List<String> picks = List.of(
+                "worst_overshoot_v IS NOT NULL ORDER BY worst_overshoot_v DESC, id",
+                "worst_undershoot_v IS NOT NULL ORDER BY worst_undershoot_v DESC, id",
+                "longest_settle_s IS NOT NULL ORDER BY longest_settle_s DESC, id",
+                "worst_ringback_margin_v IS NOT NULL ORDER BY worst_ringback_margin_v, id",
+                "longest_settle_s IS NULL AND verdict <> 'error' ORDER BY id",
+                "verdict = 'fail' ORDER BY id",
+                "verdict = 'error' ORDER BY id");
+        for (String pick : picks) {
+            try (PreparedStatement q = connection.prepareStatement("SELECT id FROM points WHERE net = ? AND net_hash = ? AND " + pick
+                    + " LIMIT 1")) {
+                q.setString(1, net);
+                q.setString(2, netHash);
+                try (ResultSet rs = q.executeQuery()) {
+                    if (rs.next()) {
+                        ids.add(rs.getLong(1));
+                    }
+                }
+            } catch (SQLException e) {
+                throw failure("read", e);
             }
         }
-        best.values().removeIf(java.util.Objects::isNull);
-        return Collections.unmodifiableMap(best);
+        return Collections.unmodifiableSet(ids);
+    }
+
+    /** A forward-only, read-only statement (sqlite-jdbc steps such a cursor one row at a time). */
+    private Statement cursor() throws SQLException {
+        Statement s = connection.createStatement(ResultSet.TYPE_FORWARD_ONLY, ResultSet.CONCUR_READ_ONLY);
+        s.setFetchSize(256);
+        return s;
+    }
+
+    private synchronized void query(String sql, List<Object> args, java.util.function.Consumer<? super StoredRow> action) {
+        ensureOpen();
+        try (PreparedStatement q = connection.prepareStatement(sql, ResultSet.TYPE_FORWARD_ONLY, ResultSet.CONCUR_READ_ONLY)) {
+            q.setFetchSize(256);
+            for (int i = 0; i < args.size(); i++) {
+                q.setObject(i + 1, args.get(i));
+            }
+            try (ResultSet rs = q.executeQuery()) {
+                while (rs.next()) {
+                    action.accept(row(rs));
+                }
+            }
+        } catch (SQLException e) {
+            throw failure("read", e);
+        }
     }
 
     private StoredRow row(ResultSet rs) throws SQLException {

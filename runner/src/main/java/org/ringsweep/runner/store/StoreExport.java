@@ -49,13 +49,23 @@ public final class StoreExport {
      * @throws UncheckedIOException when {@code out} fails
      */
     public static void toJsonLines(Collection<StoredRow> rows, Appendable out) {
-        try {
-            for (StoredRow r : rows) {
+        toJsonLines(rows::forEach, out);
+    }
+
+    /**
+     * Writes each row's record as one line of JSON followed by {@code \n}, row by row as the
+     * source yields them (one walk).
+     *
+     * @throws UncheckedIOException when {@code out} fails
+     */
+    public static void toJsonLines(RowSource rows, Appendable out) {
+        rows.forEach(r -> {
+            try {
                 out.append(r.recordJson()).append('\n');
+            } catch (IOException e) {
+                throw new UncheckedIOException("cannot write the JSON Lines export: " + e.getMessage(), e);
             }
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the JSON Lines export: " + e.getMessage(), e);
-        }
+        });
     }
 
     /**
@@ -64,21 +74,29 @@ public final class StoreExport {
      * @throws UncheckedIOException when {@code out} fails
      */
     public static void toCsv(Collection<StoredRow> rows, Appendable out) {
-        List<JsonNode> records = new ArrayList<>();
+        toCsv(rows::forEach, out);
+    }
+
+    /**
+     * Writes the rows as CSV (columns in the class comment), in the order the source yields them.
+     * Two walks over the source: the first finds the columns (swept paths and metric keys), the
+     * second writes the lines; nothing per row is kept between them.
+     *
+     * @throws UncheckedIOException when {@code out} fails
+     */
+    public static void toCsv(RowSource rows, Appendable out) {
         Set<String> paths = new TreeSet<>();
         Set<String> metrics = new LinkedHashSet<>(METRICS);
-        for (StoredRow r : rows) {
-            JsonNode rec = parse(r);
-            records.add(rec);
+        rows.forEach(r -> {
             paths.addAll(r.point().keySet());
-            for (JsonNode receiver : rec.path("receivers")) {
+            for (JsonNode receiver : parse(r).path("receivers")) {
                 for (Map.Entry<String, JsonNode> f : receiver.properties()) {
                     if (!RECEIVER_FIELDS.contains(f.getKey()) && f.getValue().isObject()) {
                         f.getValue().fieldNames().forEachRemaining(metrics::add);
                     }
                 }
             }
-        }
+        });
         List<String> header = new ArrayList<>(List.of("net", "corner", "point_key"));
         header.addAll(paths);
         header.addAll(List.of("receiver", "edge"));
@@ -86,44 +104,52 @@ public final class StoreExport {
         header.addAll(List.of("violations", "receiver_verdict", "verdict", "error", "net_hash"));
         try {
             line(out, header);
-            int i = 0;
-            for (StoredRow r : rows) {
-                JsonNode rec = records.get(i++);
-                List<String> lead = new ArrayList<>(List.of(r.net(), r.corner(), r.pointKey()));
-                for (String p : paths) {
-                    lead.add(r.point().containsKey(p) ? number(rec.path("point").path(p)) : "");
+            rows.forEach(r -> {
+                try {
+                    csvLines(r, parse(r), paths, metrics, out);
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
                 }
-                List<String> tail = List.of(r.verdict().word(), r.error(), r.netHash());
-                boolean any = false;
-                for (JsonNode receiver : rec.path("receivers")) {
-                    for (Map.Entry<String, JsonNode> f : receiver.properties()) {
-                        if (RECEIVER_FIELDS.contains(f.getKey()) || !f.getValue().isObject()) {
-                            continue;
-                        }
-                        List<String> cells = new ArrayList<>(lead);
-                        cells.add(receiver.path("pin").asText());
-                        cells.add(f.getKey());
-                        for (String m : metrics) {
-                            cells.add(number(f.getValue().path(m)));
-                        }
-                        cells.add(violations(receiver, f.getKey()));
-                        cells.add(receiver.path("verdict").asText());
-                        cells.addAll(tail);
-                        line(out, cells);
-                        any = true;
-                    }
+            });
+        } catch (IOException | UncheckedIOException e) {
+            IOException cause = e instanceof UncheckedIOException u ? u.getCause() : (IOException) e;
+            throw new UncheckedIOException("cannot write the CSV export: " + cause.getMessage(), cause);
+        }
+    }
+
+    /** The lines of one row: one per receiver and edge, or one for a point without receivers. */
+    private static void csvLines(StoredRow r, JsonNode rec, Set<String> paths, Set<String> metrics, Appendable out) throws IOException {
+        List<String> lead = new ArrayList<>(List.of(r.net(), r.corner(), r.pointKey()));
+        for (String p : paths) {
+            lead.add(r.point().containsKey(p) ? number(rec.path("point").path(p)) : "");
+        }
+        List<String> tail = List.of(r.verdict().word(), r.error(), r.netHash());
+        boolean any = false;
+        for (JsonNode receiver : rec.path("receivers")) {
+            for (Map.Entry<String, JsonNode> f : receiver.properties()) {
+                if (RECEIVER_FIELDS.contains(f.getKey()) || !f.getValue().isObject()) {
+                    continue;
                 }
-                if (!any) {
-                    List<String> cells = new ArrayList<>(lead);
-                    for (int k = 0; k < 2 + metrics.size() + 2; k++) {
-                        cells.add("");
-                    }
-                    cells.addAll(tail);
-                    line(out, cells);
+                List<String> cells = new ArrayList<>(lead);
+                cells.add(receiver.path("pin").asText());
+                cells.add(f.getKey());
+                for (String m : metrics) {
+                    cells.add(number(f.getValue().path(m)));
                 }
+                cells.add(violations(receiver, f.getKey()));
+                cells.add(receiver.path("verdict").asText());
+                cells.addAll(tail);
+                line(out, cells);
+                any = true;
             }
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the CSV export: " + e.getMessage(), e);
+        }
+        if (!any) {
+            List<String> cells = new ArrayList<>(lead);
+            for (int k = 0; k < 2 + metrics.size() + 2; k++) {
+                cells.add("");
+            }
+            cells.addAll(tail);
+            line(out, cells);
         }
     }
 

@@ -2,12 +2,14 @@ package org.ringsweep.runner.sweep;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.util.AbstractList;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.RandomAccess;
 import org.ringsweep.api.net.Location;
 import org.ringsweep.api.net.Net;
 import org.ringsweep.api.net.Point;
@@ -32,11 +34,22 @@ import org.ringsweep.runner.input.PointParser;
  * the last varying fastest; {@link Combine#ZIP} takes the i-th value of every entry (a pair with
  * a corner the net lacks is dropped). With no entry left for a net it runs once at {@code typ}.
  * Each point's overrides are its corner's values followed by the swept values
- * ({@code cornerPoint.then(values)}, the swept values win). Immutable and thread-safe.
+ * ({@code cornerPoint.then(values)}, the swept values win).
+ *
+ * <p><b>Lazily.</b> A plan holds only the resolved axes (one list of values per entry); its
+ * {@link Plan#points()} is a read-only list view that builds the point at an index when asked
+ * (grid: the index read as a mixed-radix number, the last entry its lowest digit; zip: the i-th
+ * kept position). So a plan of a million points costs what its value lists cost, and the count
+ * is arithmetic (grid: the product of the list lengths; zip: the kept positions). Immutable and
+ * thread-safe.
  */
 public final class SweepPlanner {
-    /** The most points one net may have unless told otherwise. */
-    public static final long DEFAULT_MAX_POINTS = 100_000;
+    /**
+     * The most points one net may have unless told otherwise: far beyond any sweep that can
+     * finish (a billion points at a millisecond each is eleven days), so only a plan made absurd
+     * by a slip (a {@code steps} with three zeros too many) is refused before it starts.
+     */
+    public static final long DEFAULT_MAX_POINTS = 1_000_000_000L;
     private static final String TYP = "typ";
 
     private final long maxPoints;
@@ -46,10 +59,10 @@ public final class SweepPlanner {
         this(DEFAULT_MAX_POINTS);
     }
 
-    /** @param maxPoints the most points one net may have; more is an input error */
+    /** @param maxPoints the most points one net may have, at most {@value #DEFAULT_MAX_POINTS}; more is an input error */
     public SweepPlanner(long maxPoints) {
-        if (maxPoints < 1) {
-            throw new IllegalArgumentException("maxPoints must be at least 1");
+        if (maxPoints < 1 || maxPoints > DEFAULT_MAX_POINTS) {
+            throw new IllegalArgumentException("maxPoints must be 1.." + DEFAULT_MAX_POINTS + ", found " + maxPoints);
         }
         this.maxPoints = maxPoints;
     }
@@ -58,16 +71,18 @@ public final class SweepPlanner {
      * The points of one net.
      *
      * @param net      the net
-     * @param points   the points in run order; {@link PointSpec#index()} is 1-based, {@link PointSpec#corner()}
-     *                 the corner name ({@code typ} without a corner entry), {@link PointSpec#swept()} the
-     *                 swept {@code ID/param} → SI value in entry order (corners are not in it)
+     * @param points   the points in run order, built on demand (see the class comment): a
+     *                 read-only random-access view; {@link PointSpec#index()} is 1-based,
+     *                 {@link PointSpec#corner()} the corner name ({@code typ} without a corner
+     *                 entry), {@link PointSpec#swept()} the swept {@code ID/param} → SI value in
+     *                 entry order (corners are not in it)
      * @param warnings what was skipped for this net, each naming the sweep file position and the net
      */
     public record Plan(Net net, List<PointSpec> points, List<String> warnings) {
-        /** Copies the lists. */
+        /** Keeps a lazy view as it is (it is immutable); copies any other list. */
         public Plan {
             Objects.requireNonNull(net, "net");
-            points = List.copyOf(points);
+            points = points instanceof LazyPoints ? points : List.copyOf(points);
             warnings = List.copyOf(warnings);
         }
     }
@@ -87,24 +102,23 @@ public final class SweepPlanner {
     }
 
     /**
-     * Plans {@code sweep} for {@code net}.
+     * Plans {@code sweep} for {@code net}. Nothing per point is built here.
      *
      * @throws InputException for values that do not fit the net's parameters, unequal zip
-     *                        lengths, or more than the allowed number of points
+     *                        lengths, or more than the allowed number of points (naming the
+     *                        sweep file, its {@code vary} key and the net)
      */
     public Plan plan(SweepFile sweep, Net net, PointParser parser) {
         Resolved r = resolve(sweep, net, parser);
         long n = count(sweep.combine(), r.axes());
         if (n > maxPoints) {
             Vary first = sweep.vary().get(0);
-            throw new InputException(first.location(), "vary", "the sweep makes " + n + " points for net " + net.name()
+            throw new InputException(first.location(), "vary", "the sweep makes "
+                    + (n == Long.MAX_VALUE ? "more than " + Long.MAX_VALUE : String.valueOf(n)) + " points for net " + net.name()
                     + ", more than the limit of " + maxPoints + "; expected fewer values or steps");
         }
-        List<List<Item>> tuples = sweep.combine() == Combine.GRID ? grid(r.axes()) : zip(r.axes());
-        List<PointSpec> points = new ArrayList<>(tuples.size());
-        for (List<Item> tuple : tuples) {
-            points.add(spec(r.axes(), tuple, points.size() + 1));
-        }
+        checkSteps(r.axes());
+        List<PointSpec> points = sweep.combine() == Combine.GRID ? new GridPoints(r.axes(), (int) n) : new ZipPoints(r.axes());
         List<String> warnings = new ArrayList<>(r.warnings());
         if (r.axes().isEmpty()) {
             warnings.add(sweep.file() + ": nothing in the sweep applies to net " + net.name() + "; it runs once at typ");
@@ -113,18 +127,36 @@ public final class SweepPlanner {
     }
 
     /**
-     * The number of points {@link #plan} gives for {@code net}, without building them (for a
-     * plan print or a size check before running).
+     * The number of points {@link #plan} gives for {@code net}, by arithmetic (for a plan print
+     * or a size check before running); {@link Long#MAX_VALUE} when the product overflows.
      *
      * @throws InputException as {@link #plan} does for values that do not fit the net
      */
     public static long count(SweepFile sweep, Net net, PointParser parser) {
-        return count(sweep.combine(), resolve(sweep, net, parser).axes());
+        List<Axis> axes = resolve(sweep, net, parser).axes();
+        long n = count(sweep.combine(), axes);
+        if (n <= DEFAULT_MAX_POINTS) {
+            checkSteps(axes);
+        }
+        return n;
+    }
+
+    /**
+     * Parses every step of every range entry once (and forgets it), so a step the parameter
+     * refuses is an input error before the run, not a failure in the middle of it. Done after
+     * the size check, so an absurd {@code steps} is refused at once.
+     */
+    private static void checkSteps(List<Axis> axes) {
+        for (Axis a : axes) {
+            if (a.items() instanceof RangeItems steps) {
+                steps.forEach(checked -> { });
+            }
+        }
     }
 
     private static long count(Combine combine, List<Axis> axes) {
         if (combine == Combine.ZIP) {
-            return axes.isEmpty() ? 1 : zip(axes).size();
+            return keptZipPositions(axes).length;
         }
         long n = 1;
         for (Axis a : axes) {
@@ -201,9 +233,10 @@ public final class SweepPlanner {
             double from = number(parser, net, path, r.from()).si();
             double to = number(parser, net, path, r.to()).si();
             SweepChecks.bounds(r, from, to);
-            for (double si : r.log() ? geometric(from, to, r.steps()) : linear(from, to, r.steps())) {
-                numbers.add(number(parser, net, path, new Vary.Text(Double.toString(si), v.location(), v.key())));
-            }
+            List<Item> steps = new RangeItems(r.steps(), k -> new Item(null, null,
+                    number(parser, net, path, new Vary.Text(Double.toString(r.log() ? geometricAt(from, to, r.steps(), k)
+                            : linearAt(from, to, r.steps(), k)), v.location(), v.key())), true));
+            return new Axis(v, path, steps);
         } else {
             Vary.SeriesRange s = (Vary.SeriesRange) v.values();
             double from = number(parser, net, path, s.from()).si();
@@ -221,6 +254,31 @@ public final class SweepPlanner {
         return new Axis(v, path, numbers.stream().map(n -> new Item(null, null, n, true)).toList());
     }
 
+    /**
+     * The steps of a {@code from}/{@code to}/{@code steps} entry, each built (and parsed, as a
+     * listed value would be) when asked, so a range of a million steps is not held in memory.
+     */
+    private static final class RangeItems extends AbstractList<Item> implements RandomAccess {
+        private final int steps;
+        private final java.util.function.IntFunction<Item> step;
+
+        RangeItems(int steps, java.util.function.IntFunction<Item> step) {
+            this.steps = steps;
+            this.step = step;
+        }
+
+        @Override
+        public int size() {
+            return steps;
+        }
+
+        @Override
+        public Item get(int k) {
+            Objects.checkIndex(k, steps);
+            return step.apply(k);
+        }
+    }
+
     private static Value.Number number(PointParser parser, Net net, ValuePath path, Vary.Text t) {
         Value value = parser.value(net, path, t.text(), t.location(), t.key());
         if (value instanceof Value.Number n) {
@@ -235,63 +293,120 @@ public final class SweepPlanner {
      * the shortest decimal form of each bound, so 10 to 100 in 10 steps is exactly 10, 20 … 100.
      */
     static List<Double> linear(double from, double to, int steps) {
-        BigDecimal a = BigDecimal.valueOf(from);
-        BigDecimal span = BigDecimal.valueOf(to).subtract(a);
-        BigDecimal intervals = BigDecimal.valueOf(steps - 1L);
         List<Double> out = new ArrayList<>(steps);
         for (int k = 0; k < steps; k++) {
-            out.add(k == steps - 1 ? to : a.add(span.multiply(BigDecimal.valueOf(k)).divide(intervals, MathContext.DECIMAL128)).doubleValue());
+            out.add(linearAt(from, to, steps, k));
         }
         return out;
+    }
+
+    /** The {@code k}-th (0-based) of {@link #linear}. */
+    static double linearAt(double from, double to, int steps, int k) {
+        if (k == steps - 1) {
+            return to;
+        }
+        BigDecimal a = BigDecimal.valueOf(from);
+        BigDecimal span = BigDecimal.valueOf(to).subtract(a);
+        return a.add(span.multiply(BigDecimal.valueOf(k)).divide(BigDecimal.valueOf(steps - 1L), MathContext.DECIMAL128)).doubleValue();
     }
 
     /** {@code steps} values from {@code from} to {@code to} in the constant ratio (to/from)^(1/(steps−1)); both ends exact. */
     static List<Double> geometric(double from, double to, int steps) {
-        double lnRatio = Math.log(to / from);
         List<Double> out = new ArrayList<>(steps);
         for (int k = 0; k < steps; k++) {
-            out.add(k == 0 ? from : k == steps - 1 ? to : from * Math.exp(lnRatio * k / (steps - 1)));
+            out.add(geometricAt(from, to, steps, k));
         }
         return out;
     }
 
-    private static List<List<Item>> grid(List<Axis> axes) {
-        List<List<Item>> out = new ArrayList<>();
-        out.add(List.of());
-        for (Axis a : axes) {
-            List<List<Item>> next = new ArrayList<>(out.size() * a.items().size());
-            for (List<Item> prefix : out) {
-                for (Item item : a.items()) {
-                    List<Item> t = new ArrayList<>(prefix);
-                    t.add(item);
-                    next.add(t);
-                }
+    /** The {@code k}-th (0-based) of {@link #geometric}. */
+    static double geometricAt(double from, double to, int steps, int k) {
+        return k == 0 ? from : k == steps - 1 ? to : from * Math.exp(Math.log(to / from) * k / (steps - 1));
+    }
+
+    /** The plan's points as a list view; {@link #get} builds the point. */
+    private abstract static class LazyPoints extends AbstractList<PointSpec> implements RandomAccess {
+        final List<Axis> axes;
+
+        LazyPoints(List<Axis> axes) {
+            this.axes = axes;
+        }
+    }
+
+    /** Grid: index {@code i} read as a mixed-radix number whose lowest digit is the last axis. */
+    private static final class GridPoints extends LazyPoints {
+        private final int size;
+
+        GridPoints(List<Axis> axes, int size) {
+            super(axes);
+            this.size = size;
+        }
+
+        @Override
+        public int size() {
+            return size;
+        }
+
+        @Override
+        public PointSpec get(int index) {
+            Objects.checkIndex(index, size);
+            Item[] tuple = new Item[axes.size()];
+            int rest = index;
+            for (int a = axes.size() - 1; a >= 0; a--) {
+                List<Item> items = axes.get(a).items();
+                tuple[a] = items.get(rest % items.size());
+                rest /= items.size();
             }
-            out = next;
+            return spec(axes, tuple, index + 1);
         }
-        return out;
     }
 
-    private static List<List<Item>> zip(List<Axis> axes) {
-        List<List<Item>> out = new ArrayList<>();
+    /** Zip: the i-th position at which every axis has a known value. */
+    private static final class ZipPoints extends LazyPoints {
+        private final int[] kept;
+
+        ZipPoints(List<Axis> axes) {
+            super(axes);
+            this.kept = keptZipPositions(axes);
+        }
+
+        @Override
+        public int size() {
+            return kept.length;
+        }
+
+        @Override
+        public PointSpec get(int index) {
+            Objects.checkIndex(index, kept.length);
+            Item[] tuple = new Item[axes.size()];
+            for (int a = 0; a < axes.size(); a++) {
+                tuple[a] = axes.get(a).items().get(kept[index]);
+            }
+            return spec(axes, tuple, index + 1);
+        }
+    }
+
+    /** The zip positions whose values are all known (a corner the net lacks drops its pair); {@code [0]} without axes. */
+    private static int[] keptZipPositions(List<Axis> axes) {
         int n = axes.isEmpty() ? 1 : axes.get(0).items().size();
+        int[] kept = new int[n];
+        int k = 0;
         for (int i = 0; i < n; i++) {
             final int at = i;
-            List<Item> t = axes.stream().map(a -> a.items().get(at)).toList();
-            if (t.stream().allMatch(Item::known)) {
-                out.add(t);
+            if (axes.stream().allMatch(a -> a.items().get(at).known())) {
+                kept[k++] = i;
             }
         }
-        return out;
+        return java.util.Arrays.copyOf(kept, k);
     }
 
-    private static PointSpec spec(List<Axis> axes, List<Item> tuple, int index) {
+    private static PointSpec spec(List<Axis> axes, Item[] tuple, int index) {
         String corner = TYP;
         Point cornerPoint = Point.NONE;
         Map<ValuePath, Value> values = new LinkedHashMap<>();
         Map<String, Double> swept = new LinkedHashMap<>();
         for (int i = 0; i < axes.size(); i++) {
-            Item item = tuple.get(i);
+            Item item = tuple[i];
             if (axes.get(i).isCorner()) {
                 corner = item.corner();
                 cornerPoint = item.cornerPoint();

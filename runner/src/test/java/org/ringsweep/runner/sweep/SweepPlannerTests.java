@@ -287,4 +287,88 @@ class SweepPlannerTests {
         InputException e = assertThrows(InputException.class, () -> new SweepPlanner(9_999).plan(s, spi, parser));
         assertTrue(e.getMessage().contains("10000 points"), e.getMessage());
     }
+
+    /** The values a plan of one entry gives, in order: the oracle for the entries' own order. */
+    private List<Double> valuesOf(String entry, String path) {
+        return swept(plan(spi, entry), path);
+    }
+
+    @Test
+    void aLazyGridIsTheNestedLoopOfItsEntriesWithTheLastFastest() {
+        String corner = "  - { target: corner, values: [slow, typ, fast] }";
+        String series = "  - { target: R5/value, series: E6, from: 10, to: 47 }";
+        String log = "  - { target: U1.14/rise, from: 0.5ns, to: 2ns, steps: 3, log: true }";
+        String listed = "  - { target: U1.14/r_out, values: [12, 18] }";
+        SweepPlanner.Plan p = plan(spi, corner, series, log, listed);
+        List<String> corners = List.of("slow", "typ", "fast");
+        List<Double> r5 = valuesOf(series, "R5/value");
+        List<Double> rise = valuesOf(log, "U1.14/rise");
+        List<Double> rOut = valuesOf(listed, "U1.14/r_out");
+        // grid = cartesian product in the listed order, the last entry fastest (formats.md "Sweep file"),
+        // as the materialised list this planner replaced built it: nested loops, outermost first
+        assertEquals(List.of(10.0, 15.0, 22.0, 33.0, 47.0), r5, "IEC 60063 E6 values from 10 to 47");
+        assertEquals(corners.size() * r5.size() * rise.size() * rOut.size(), p.points().size());
+        int index = 0;
+        for (String c : corners) {
+            for (double r : r5) {
+                for (double t : rise) {
+                    for (double o : rOut) {
+                        PointSpec got = p.points().get(index++);
+                        assertEquals(index, got.index(), "1-based run order");
+                        assertEquals(c, got.corner());
+                        assertEquals(Map.of("R5/value", r, "U1.14/rise", t, "U1.14/r_out", o), got.swept());
+                        assertEquals(List.of("R5/value", "U1.14/rise", "U1.14/r_out"), List.copyOf(got.swept().keySet()), "entry order");
+                        assertEquals(Value.of(t, Dimension.TIME), got.overrides().values().get(RISE), "swept values win over the corner's");
+                        assertEquals(Value.of(o, Dimension.RESISTANCE), got.overrides().values().get(R_OUT));
+                    }
+                }
+            }
+        }
+        assertEquals(p.points().get(17), p.points().get(17), "a point built twice is the same point");
+        assertEquals(p.points(), p.points().stream().toList(), "iteration and indexing agree");
+    }
+
+    @Test
+    void aLazyZipTakesTheIthValueOfEveryEntry() {
+        String range = "  - { target: U1.14/rise, from: 1ns, to: 3ns, steps: 5 }";
+        SweepPlanner.Plan p = plan(spi, "  - { target: R5/value, values: [10, 22, 33, 47, 68] }", range, "combine: zip");
+        List<Double> rise = valuesOf(range, "U1.14/rise");
+        // linear: 1, 1.5, 2, 2.5, 3 ns, the ends exact (formats.md "Sweep file": from/to/steps)
+        assertEquals(List.of(1e-9, 1.5e-9, 2e-9, 2.5e-9, 3e-9), rise);
+        assertEquals(5, p.points().size());
+        List<Double> r5 = List.of(10.0, 22.0, 33.0, 47.0, 68.0);
+        for (int i = 0; i < 5; i++) {
+            assertEquals(Map.of("R5/value", r5.get(i), "U1.14/rise", rise.get(i)), p.points().get(i).swept());
+        }
+    }
+
+    @Test
+    void aMillionPointGridIsCountedByArithmeticAndBuildsAnyPointOnDemand() {
+        SweepFile s = sweep(
+                "  - { target: R5/value, from: 1, to: 1000, steps: 1000 }",
+                "  - { target: U1.14/rise, from: 1ns, to: 1000ns, steps: 1000 }");
+        SweepPlanner.Plan p = planner.plan(s, spi, parser);
+        // 1000 × 1000 (product of the entry sizes); linear steps of exactly 1 ohm and 1 ns
+        assertEquals(1_000_000, p.points().size());
+        assertEquals(1_000_000, SweepPlanner.count(s, spi, parser));
+        assertEquals(Map.of("R5/value", 1.0, "U1.14/rise", 1e-9), p.points().get(0).swept());
+        assertEquals(Map.of("R5/value", 2.0, "U1.14/rise", 1e-9), p.points().get(1000).swept(), "the rise time wraps first");
+        assertEquals(Map.of("R5/value", 457.0, "U1.14/rise", 124e-9), p.points().get(456 * 1000 + 123).swept());
+        assertEquals(Map.of("R5/value", 1000.0, "U1.14/rise", 1000e-9), p.points().get(999_999).swept());
+        assertEquals(1_000_000, p.points().get(999_999).index());
+        assertThrows(IndexOutOfBoundsException.class, () -> p.points().get(1_000_000));
+        assertThrows(UnsupportedOperationException.class, () -> p.points().remove(0), "the plan is read-only");
+    }
+
+    @Test
+    void anAbsurdPlanIsRefusedNamingTheSweepFileTheKeyAndTheNet() {
+        SweepFile s = sweep(
+                "  - { target: R5/value, from: 1, to: 100, steps: 100000 }",
+                "  - { target: U1.14/rise, from: 1ns, to: 2ns, steps: 100000 }");
+        InputException e = assertThrows(InputException.class, () -> planner.plan(s, spi, parser));
+        // 10^5 × 10^5 = 10^10 points, beyond the 10^9 guard
+        assertTrue(e.getMessage().contains("10000000000 points for net SPI0_SCK"), e.getMessage());
+        assertTrue(e.getMessage().contains("sweep.yaml"), e.getMessage());
+        assertEquals("vary", e.key());
+    }
 }
