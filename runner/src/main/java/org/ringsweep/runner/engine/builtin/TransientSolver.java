@@ -33,8 +33,19 @@ import org.ringsweep.runner.engine.FailureKind;
  *     to it.</li>
  * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each breakpoint damp the
  *     trapezoidal rule's numerical ringing at a corner of a source.</li>
+ * <li>Table-driven current sources ({@link Primitive.TableCurrent}, the IBIS V–I tables): a
+ *     voltage-controlled current source linearised at the iterate, {@code g = s(t)·dy/dv} of the
+ *     table segment holding the controlling voltage, {@code Ieq = s(t)·y(v) − g·v}. For the first
+ *     {@value #TABLE_FREE_ITERATIONS} iterations the controlling voltage goes wherever Newton puts
+ *     it; after them an iteration stops on the next table point and continues with the slope
+ *     beyond it (the slope is discontinuous at table points, and two segments could otherwise
+ *     send the iterate back and forth). The scale's corner times are breakpoints. Tables take
+ *     part in the DC operating point at their t = 0 scale.</li>
+ * <li>Diode junction capacitance (CJO &gt; 0): the SPICE depletion charge
+ *     ({@link Junction#charge}), integrated with the step's rule from the charge
+ *     ({@code i = (q − qₙ)/h}, or {@code 2(q − qₙ)/h − iₙ}), linearised with {@code Cj(v)·(1 or 2)/h}.</li>
  * <li>Diodes: Newton–Raphson with SPICE's {@code pnjlim} limiting. The factored matrix is reused
- *     while each diode's conductance stays within {@value #CHORD_RELATIVE} (relative) plus
+ *     while each diode's (and table's) conductance stays within {@value #CHORD_RELATIVE} (relative) plus
  *     {@value #CHORD_ABSOLUTE} S of the factored one (a chord iteration; its right-hand side
  *     uses the true junction current, so its fixed point is the exact solution). A point is
  *     accepted when no voltage was limited, the solution moved within {@code reltol}/{@code vntol}
@@ -61,6 +72,12 @@ final class TransientSolver {
     static final double CHORD_RELATIVE = 0.05;
     /** Absolute change of a diode's conductance that makes the solver re-factor (S). */
     static final double CHORD_ABSOLUTE = 1e-6;
+    /**
+     * Newton iterations in which a table's controlling voltage may jump to wherever Newton puts
+     * it; after them each iteration may only reach the next table point, so the iterate cannot
+     * swing between two segments whose slopes each send it into the other.
+     */
+    static final int TABLE_FREE_ITERATIONS = 8;
     /** How many steps between two looks at the wall clock. */
     private static final int CLOCK_EVERY = 64;
 
@@ -91,6 +108,11 @@ final class TransientSolver {
     private final DiodeModel[] dioM;
     private final double[] dioNvt;
     private final double[] dioCrit;
+    private final boolean[] dioCap;
+    private final int[][] tab;
+    private final PwlTable[] tabY;
+    /** The scale of each table in time, or null for a constant 1. */
+    private final PwlTable[] tabK;
 
     // State of the last accepted point.
     private double[] x;
@@ -100,6 +122,12 @@ final class TransientSolver {
     private final double[] indJ;
     private final LineHistory[] history;
     private final double[] dioV;
+    /** Depletion charge (C) and its current (A) at the last accepted point, per diode. */
+    private final double[] dioQ;
+    private final double[] dioIc;
+    /** Controlling voltage and its table segment at the last accepted point, per table. */
+    private final double[] tabV;
+    private final int[] tabSeg;
 
     // Per-iteration scratch.
     private final double[] dioIter;
@@ -107,6 +135,17 @@ final class TransientSolver {
     private final double[] dioIeq;
     private final double[] lineIh;
     private final double[] trG;
+    private final double[] tabIter;
+    private final int[] tabIterSeg;
+    private final int[] tabKSeg;
+    /** Each table's scale at the time point being solved. */
+    private final double[] tabS;
+    private final double[] tabG;
+    private final double[] tabIeq;
+    /** The rule and step of the point being solved (the diodes' charge companion depends on them). */
+    private Rule rule = Rule.DC;
+    private double h;
+    private boolean nonlinearChanged;
 
     // Factorisation cache for the transient system.
     private final double[] matrix;
@@ -149,6 +188,28 @@ final class TransientSolver {
             dioNvt[d] = Junction.nvt(dioM[d]);
             dioCrit[d] = Junction.criticalVoltage(dioM[d]);
         }
+        dioCap = new boolean[dioM.length];
+        for (int d = 0; d < dioM.length; d++) {
+            dioCap[d] = dioM[d].cjo() > 0;
+        }
+        tab = net.tableNodes.toArray(new int[0][]);
+        tabY = new PwlTable[tab.length];
+        tabK = new PwlTable[tab.length];
+        for (int k = 0; k < tab.length; k++) {
+            Primitive.TableCurrent tc = net.tables.get(k);
+            tabY[k] = new PwlTable(tc.x(), tc.y());
+            tabK[k] = tc.scaleTimes().length == 0 ? null : new PwlTable(tc.scaleTimes(), tc.scale());
+        }
+        dioQ = new double[dio.length];
+        dioIc = new double[dio.length];
+        tabV = new double[tab.length];
+        tabSeg = new int[tab.length];
+        tabIter = new double[tab.length];
+        tabIterSeg = new int[tab.length];
+        tabKSeg = new int[tab.length];
+        tabS = new double[tab.length];
+        tabG = new double[tab.length];
+        tabIeq = new double[tab.length];
         capV = new double[cap.length];
         capI = new double[cap.length];
         indV = new double[ind.length];
@@ -224,6 +285,7 @@ final class TransientSolver {
             for (int k = 0; k < tres.length; k++) {
                 trG[k] = 1 / tresEl[k].ohmsAt(tn);
             }
+            scales(tn);
             if (!newton(rule, dt, tn, 1.0)) {
                 throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
                         + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
@@ -265,7 +327,19 @@ final class TransientSolver {
         }
     }
 
-    /** PWL and timed-resistor corners inside (0, stop), and the stop time; sorted, near-duplicates merged. */
+    /** Each table's scale at time {@code t}. */
+    private void scales(double t) {
+        for (int k = 0; k < tab.length; k++) {
+            if (tabK[k] == null) {
+                tabS[k] = 1;
+            } else {
+                tabKSeg[k] = tabK[k].segmentOf(t, tabKSeg[k]);
+                tabS[k] = tabK[k].value(t, tabKSeg[k]);
+            }
+        }
+    }
+
+    /** PWL, timed-resistor and table-scale corners inside (0, stop), and the stop time; sorted, near-duplicates merged. */
     private double[] breakpoints(double stop, double h) {
         List<Double> all = new ArrayList<>();
         for (Primitive p : srcEl) {
@@ -277,6 +351,11 @@ final class TransientSolver {
         }
         for (Primitive.TimedResistor r : tresEl) {
             for (double t : r.times()) {
+                all.add(t);
+            }
+        }
+        for (Primitive.TableCurrent tc : net.tables) {
+            for (double t : tc.scaleTimes()) {
                 all.add(t);
             }
         }
@@ -305,12 +384,14 @@ final class TransientSolver {
         double[] b = new double[dcSize];
         DenseLu dcLu = new DenseLu(dcSize);
         double[] sol = new double[dcSize];
-        Arrays.fill(dioIter, 0);
+        scales(0);
+        rule = Rule.DC;
+        resetIterates();
         boolean ok = dcNewton(a, b, dcLu, sol, 1.0);
         if (!ok) {
             // Source stepping: ramp the sources up from zero, each solution starting the next.
             Arrays.fill(sol, 0);
-            Arrays.fill(dioIter, 0);
+            resetIterates();
             ok = true;
             for (int s = 1; s <= 20 && ok; s++) {
                 ok = dcNewton(a, b, dcLu, sol, s / 20.0);
@@ -338,7 +419,22 @@ final class TransientSolver {
         System.arraycopy(dioIter, 0, dioV, 0, dio.length);
         for (int d = 0; d < dio.length; d++) {
             dioG[d] = Junction.conductance(dioM[d], dioV[d]);
+            dioQ[d] = dioCap[d] ? Junction.charge(dioM[d], dioV[d]) : 0;
+            dioIc[d] = 0;
         }
+        acceptTables();
+    }
+
+    private void resetIterates() {
+        Arrays.fill(dioIter, 0);
+        Arrays.fill(tabIter, 0);
+        for (int k = 0; k < tab.length; k++) {
+            tabIterSeg[k] = tabY[k].segmentOf(0, 0);
+        }
+    }
+
+    private boolean nonlinear() {
+        return dio.length > 0 || tab.length > 0;
     }
 
     private boolean dcNewton(double[] a, double[] b, DenseLu dcLu, double[] sol, double scale) {
@@ -346,20 +442,18 @@ final class TransientSolver {
             boolean limited = linearise(sol, iter, false);
             Arrays.fill(a, 0);
             stampLinear(a, dcSize, Rule.DC, 0);
-            for (int d = 0; d < dio.length; d++) {
-                conductance(a, dcSize, dio[d][0], dio[d][1], dioG[d]);
-            }
+            stampNonlinear(a, dcSize);
             int bad = dcLu.factor(a);
             if (bad >= 0) {
                 throw singular(bad, "at the DC operating point");
             }
             Arrays.fill(b, 0);
             stampSources(b, 0, scale);
-            stampDiodeCurrents(b);
+            stampNonlinearCurrents(b);
             dcLu.solve(b);
-            boolean converged = !limited && (dio.length == 0 || iter > 0) && close(b, sol, dcSize);
+            boolean converged = !limited && (!nonlinear() || iter > 0) && close(b, sol, dcSize);
             System.arraycopy(b, 0, sol, 0, dcSize);
-            if (dio.length == 0 || converged) {
+            if (!nonlinear() || converged) {
                 return true;
             }
         }
@@ -369,15 +463,15 @@ final class TransientSolver {
     // ---------------------------------------------------------------- transient point
 
     private boolean newton(Rule rule, double h, double t, double scale) {
+        this.rule = rule;
+        this.h = h;
         double[] b = new double[size];
         for (int iter = 0; iter < MAX_NEWTON; iter++) {
             boolean limited = linearise(x, iter, true);
             if (needsFactor(rule, h)) {
                 Arrays.fill(matrix, 0);
                 stampLinear(matrix, size, rule, h);
-                for (int d = 0; d < dio.length; d++) {
-                    conductance(matrix, size, dio[d][0], dio[d][1], dioG[d]);
-                }
+                stampNonlinear(matrix, size);
                 int bad = lu.factor(matrix);
                 if (bad >= 0) {
                     throw singular(bad, "at t = `" + t + "` s");
@@ -391,13 +485,13 @@ final class TransientSolver {
             Arrays.fill(b, 0);
             stampSources(b, t, scale);
             stampHistory(b, rule, h);
-            stampDiodeCurrents(b);
+            stampNonlinearCurrents(b);
             lu.solve(b);
             boolean converged = !limited && (iter > 0 ? close(b, x, size) : true) && linearisationHolds(b);
             double[] previous = x;
             x = b;
             b = previous;
-            if (dio.length == 0 || converged) {
+            if (!nonlinear() || converged) {
                 return true;
             }
         }
@@ -406,20 +500,20 @@ final class TransientSolver {
 
     private boolean needsFactor(Rule rule, double h) {
         boolean stale = !factored || rule != factoredRule || h != factoredH || !Arrays.equals(trG, factoredTrG);
-        return stale || diodesChanged;
+        return stale || nonlinearChanged;
     }
-
-    private boolean diodesChanged;
 
     /**
      * Linearises every diode at the voltage of {@code sol} (limited by pnjlim against the last
-     * linearisation point); keeps a factored conductance while it is close enough.
+     * linearisation point) and every table at its controlling voltage (limited to the next table
+     * point after {@value #TABLE_FREE_ITERATIONS} iterations); keeps a factored conductance while
+     * it is close enough.
      *
      * @return whether any voltage was limited (then the iteration has not converged)
      */
     private boolean linearise(double[] sol, int iter, boolean keepFactored) {
         boolean limited = false;
-        diodesChanged = false;
+        nonlinearChanged = false;
         for (int d = 0; d < dio.length; d++) {
             double vd;
             if (iter == 0 && keepFactored) {
@@ -431,13 +525,69 @@ final class TransientSolver {
             }
             dioIter[d] = vd;
             double g = Junction.conductance(dioM[d], vd);
+            if (dioCap[d] && rule != Rule.DC) {
+                g += (rule == Rule.TRAPEZOID ? 2 : 1) / h * Junction.capacitance(dioM[d], vd);
+            }
             if (!keepFactored || Math.abs(g - dioG[d]) > CHORD_ABSOLUTE + CHORD_RELATIVE * Math.abs(dioG[d])) {
                 dioG[d] = g;
-                diodesChanged = true;
+                nonlinearChanged = true;
             }
-            dioIeq[d] = Junction.current(dioM[d], vd) - dioG[d] * vd;
+            dioIeq[d] = diodeCurrent(d, vd) - dioG[d] * vd;
+        }
+        for (int k = 0; k < tab.length; k++) {
+            double vc;
+            int seg;
+            if (iter == 0 && keepFactored) {
+                vc = tabV[k];
+                seg = tabSeg[k];
+            } else {
+                double proposed = v(sol, tab[k][2]) - v(sol, tab[k][3]);
+                seg = tabIterSeg[k];
+                vc = proposed;
+                if (iter < TABLE_FREE_ITERATIONS) {
+                    seg = tabY[k].segmentOf(proposed, seg);
+                } else if (proposed > tabY[k].upper(seg)) {
+                    // Stop on the next table point, linearised with the slope of the segment beyond it.
+                    vc = tabY[k].upper(seg++);
+                    limited = true;
+                } else if (proposed < tabY[k].lower(seg)) {
+                    vc = tabY[k].lower(seg--);
+                    limited = true;
+                }
+            }
+            tabIter[k] = vc;
+            tabIterSeg[k] = seg;
+            double g = tabS[k] * tabY[k].slope(seg);
+            if (!keepFactored || Math.abs(g - tabG[k]) > CHORD_ABSOLUTE + CHORD_RELATIVE * Math.abs(tabG[k])) {
+                tabG[k] = g;
+                nonlinearChanged = true;
+            }
+            tabIeq[k] = tabS[k] * tabY[k].value(vc, seg) - tabG[k] * vc;
         }
         return limited;
+    }
+
+    /**
+     * A diode's current (A) at junction voltage {@code vd}: the Shockley current and, with CJO &gt; 0
+     * in a transient step, the depletion charge's companion current {@code (q(vd) − qₙ)/h}
+     * (backward Euler) or {@code 2(q(vd) − qₙ)/h − iₙ} (trapezoidal): from the charge, so the
+     * charge is conserved whatever the capacitance does in between.
+     */
+    private double diodeCurrent(int d, double vd) {
+        double i = Junction.current(dioM[d], vd);
+        if (dioCap[d] && rule != Rule.DC) {
+            double dq = Junction.charge(dioM[d], vd) - dioQ[d];
+            i += rule == Rule.TRAPEZOID ? 2 * dq / h - dioIc[d] : dq / h;
+        }
+        return i;
+    }
+
+    private void acceptTables() {
+        for (int k = 0; k < tab.length; k++) {
+            tabV[k] = v(x, tab[k][2]) - v(x, tab[k][3]);
+            tabSeg[k] = tabY[k].segmentOf(tabV[k], tabIterSeg[k]);
+            tabIterSeg[k] = tabSeg[k];
+        }
     }
 
     private void accept(Rule rule, double h, double t) {
@@ -458,8 +608,16 @@ final class TransientSolver {
             history[l].add(t, v1, lineG[l] * v1 - lineIh[2 * l], v2, lineG[l] * v2 - lineIh[2 * l + 1]);
         }
         for (int d = 0; d < dio.length; d++) {
-            dioV[d] = v(x, dio[d][0]) - v(x, dio[d][1]);
+            double vd = v(x, dio[d][0]) - v(x, dio[d][1]);
+            if (dioCap[d]) {
+                double q = Junction.charge(dioM[d], vd);
+                double dq = q - dioQ[d];
+                dioIc[d] = rule == Rule.TRAPEZOID ? 2 * dq / h - dioIc[d] : dq / h;
+                dioQ[d] = q;
+            }
+            dioV[d] = vd;
         }
+        acceptTables();
     }
 
     // ---------------------------------------------------------------- stamps
@@ -536,9 +694,28 @@ final class TransientSolver {
         }
     }
 
-    private void stampDiodeCurrents(double[] b) {
+    /** The linearised diodes' and tables' conductances. */
+    private void stampNonlinear(double[] a, int n) {
+        for (int d = 0; d < dio.length; d++) {
+            conductance(a, n, dio[d][0], dio[d][1], dioG[d]);
+        }
+        for (int k = 0; k < tab.length; k++) {
+            // Current g·(v(cp) − v(cm)) leaving plus and entering minus: a voltage-controlled current source.
+            int[] p = tab[k];
+            double g = tabG[k];
+            add(a, n, p[0], p[2], g);
+            add(a, n, p[0], p[3], -g);
+            add(a, n, p[1], p[2], -g);
+            add(a, n, p[1], p[3], g);
+        }
+    }
+
+    private void stampNonlinearCurrents(double[] b) {
         for (int d = 0; d < dio.length; d++) {
             inject(b, dio[d][1], dio[d][0], dioIeq[d]);
+        }
+        for (int k = 0; k < tab.length; k++) {
+            inject(b, tab[k][1], tab[k][0], tabIeq[k]);
         }
     }
 
@@ -551,7 +728,15 @@ final class TransientSolver {
         for (int d = 0; d < dio.length; d++) {
             double vd = v(sol, dio[d][0]) - v(sol, dio[d][1]);
             double linear = dioG[d] * vd + dioIeq[d];
-            double exact = Junction.current(dioM[d], vd);
+            double exact = diodeCurrent(d, vd);
+            if (!(Math.abs(exact - linear) <= RELTOL * Math.max(Math.abs(exact), Math.abs(linear)) + ABSTOL)) {
+                return false;
+            }
+        }
+        for (int k = 0; k < tab.length; k++) {
+            double vc = v(sol, tab[k][2]) - v(sol, tab[k][3]);
+            double linear = tabG[k] * vc + tabIeq[k];
+            double exact = tabS[k] * tabY[k].value(vc, tabY[k].segmentOf(vc, tabIterSeg[k]));
             if (!(Math.abs(exact - linear) <= RELTOL * Math.max(Math.abs(exact), Math.abs(linear)) + ABSTOL)) {
                 return false;
             }

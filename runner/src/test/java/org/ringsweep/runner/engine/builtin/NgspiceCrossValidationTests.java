@@ -99,7 +99,7 @@ class NgspiceCrossValidationTests {
             if (!(mine instanceof SimulationOutcome.Success builtin)) {
                 throw new AssertionError("built-in engine failed: " + mine + "\n" + yaml);
             }
-            compare(e, ok.waveforms(), builtin.waveforms(), yaml);
+            compare(e, ok.waveforms(), builtin.waveforms(), yaml, true);
         } finally {
             delete(dir);
         }
@@ -112,7 +112,13 @@ class NgspiceCrossValidationTests {
         return NgspiceEngine.at(ngspice).run(job);
     }
 
-    private static void compare(Elaboration e, Waveforms ref, Waveforms mine, String yaml) {
+    /**
+     * Compares every receiver edge of two solutions with the tolerances above and throws an
+     * AssertionError listing each difference beyond them.
+     *
+     * @param statistics whether to collect jqwik statistics (only inside a property)
+     */
+    static void compare(Elaboration e, Waveforms ref, Waveforms mine, String yaml, boolean statistics) {
         double swing = e.swing();
         List<String> problems = new ArrayList<>();
         for (ReceiverProbe p : e.receivers()) {
@@ -134,19 +140,19 @@ class NgspiceCrossValidationTests {
                 double h = HYSTERESIS * swing;
                 boolean ambiguous = nearBandEdge(tr, vr, w, th, h, 0.01 * swing) || nearBandEdge(tm, vm, w, th, h, 0.01 * swing);
                 if (ambiguous) {
-                    Statistics.label("crossings").collect("extremum near the band, not compared");
+                    note(statistics, "crossings", "extremum near the band, not compared");
                     continue;
                 }
-                Statistics.label("crossings").collect("compared");
+                note(statistics, "crossings", "compared");
                 if (a.crossings() != b.crossings()) {
                     problems.add(where + " crossings: ngspice " + a.crossings() + ", builtin " + b.crossings());
                 }
                 if (Double.isFinite(a.firstCrossingS()) || Double.isFinite(b.firstCrossingS())) {
                     double tol = 10e-12 + 0.01 * Math.abs(a.firstCrossingS() - edge.source50());
                     if (plateau(tr, vr, w, th, 0.01 * swing, PLATEAU_FACTOR * tol)) {
-                        Statistics.label("first crossing").collect("on a plateau, not compared");
+                        note(statistics, "first crossing", "on a plateau, not compared");
                     } else {
-                        Statistics.label("first crossing").collect("compared");
+                        note(statistics, "first crossing", "compared");
                         check(problems, where + " first crossing", a.firstCrossingS(), b.firstCrossingS(), tol);
                     }
                 }
@@ -154,6 +160,12 @@ class NgspiceCrossValidationTests {
         }
         if (!problems.isEmpty()) {
             throw new AssertionError(String.join("\n", problems) + "\n--- net ---\n" + yaml);
+        }
+    }
+
+    private static void note(boolean statistics, String label, String value) {
+        if (statistics) {
+            Statistics.label(label).collect(value);
         }
     }
 
