@@ -31,8 +31,10 @@ import org.ringsweep.runner.engine.FailureKind;
  *     least one step in the past; breakpoints (PWL corners, timed-resistor corners, the stop
  *     time) are hit exactly, a step that would end within 1 % of a step before one is stretched
  *     to it.</li>
- * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each breakpoint damp the
- *     trapezoidal rule's numerical ringing at a corner of a source.</li>
+ * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each sharp breakpoint (the
+ *     slope changing by more than {@value #SHARP_CORNER} of itself: a ramp's start or end, not
+ *     the points of a finely sampled curve) damp the trapezoidal rule's numerical ringing at a
+ *     corner of a source.</li>
  * <li>Table-driven current sources ({@link Primitive.TableCurrent}, the IBIS V–I tables): a
  *     voltage-controlled current source linearised at the iterate, {@code g = s(t)·dy/dv} of the
  *     table segment holding the controlling voltage, {@code Ieq = s(t)·y(v) − g·v}. For the first
@@ -78,6 +80,8 @@ final class TransientSolver {
      * swing between two segments whose slopes each send it into the other.
      */
     static final int TABLE_FREE_ITERATIONS = 8;
+    /** Relative slope change that makes a source corner sharp (a restart of the damped steps). */
+    static final double SHARP_CORNER = 0.5;
     /** How many steps between two looks at the wall clock. */
     private static final int CLOCK_EVERY = 64;
 
@@ -273,7 +277,7 @@ final class TransientSolver {
             boolean corner = false;
             if (tn >= bp - 0.01 * h) {
                 tn = bp;
-                corner = true;
+                corner = sharp[next];
             }
             double dt = tn - t;
             Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
@@ -339,38 +343,58 @@ final class TransientSolver {
         }
     }
 
-    /** PWL, timed-resistor and table-scale corners inside (0, stop), and the stop time; sorted, near-duplicates merged. */
+    /**
+     * PWL, timed-resistor and table-scale corners inside (0, stop), and the stop time; sorted,
+     * near-duplicates merged. Fills {@link #sharp}: whether a corner restarts the damped steps.
+     */
     private double[] breakpoints(double stop, double h) {
-        List<Double> all = new ArrayList<>();
+        List<double[]> all = new ArrayList<>();
         for (Primitive p : srcEl) {
             if (p instanceof Primitive.PwlVoltage v) {
-                for (double t : v.times()) {
-                    all.add(t);
-                }
+                corners(v.times(), v.volts(), all);
             }
         }
         for (Primitive.TimedResistor r : tresEl) {
-            for (double t : r.times()) {
-                all.add(t);
-            }
+            corners(r.times(), r.ohms(), all);
         }
         for (Primitive.TableCurrent tc : net.tables) {
-            for (double t : tc.scaleTimes()) {
-                all.add(t);
-            }
+            corners(tc.scaleTimes(), tc.scale(), all);
         }
         double merge = 1e-6 * h;
-        double[] sorted = all.stream().mapToDouble(Double::doubleValue).filter(t -> t > merge && t < stop - merge)
-                .sorted().toArray();
-        double[] out = new double[sorted.length + 1];
+        all.removeIf(c -> !(c[0] > merge && c[0] < stop - merge));
+        all.sort((a, b) -> Double.compare(a[0], b[0]));
+        double[] out = new double[all.size() + 1];
+        sharp = new boolean[all.size() + 1];
         int n = 0;
-        for (double t : sorted) {
-            if (n == 0 || t - out[n - 1] > merge) {
-                out[n++] = t;
+        for (double[] c : all) {
+            if (n == 0 || c[0] - out[n - 1] > merge) {
+                out[n++] = c[0];
             }
+            sharp[n - 1] |= c[1] != 0;
         }
         out[n++] = stop;
+        sharp = Arrays.copyOf(sharp, n);
         return Arrays.copyOf(out, n);
+    }
+
+    /** Whether each breakpoint restarts the damped steps (see {@link #corners}). */
+    private boolean[] sharp;
+
+    /**
+     * Adds the corners of a function of time held outside its points, each as {time, 1 if sharp
+     * else 0}. A corner is sharp when the slope changes there by more than
+     * {@value #SHARP_CORNER} of the larger of its two slopes (a ramp starting or ending); the
+     * corners of a finely sampled smooth curve (an IBIS switching waveform) are hit, but
+     * integrated through with the trapezoidal rule, whose accuracy backward-Euler steps at each of
+     * them would lose.
+     */
+    private static void corners(double[] t, double[] v, List<double[]> out) {
+        for (int i = 0; i < t.length; i++) {
+            double before = i == 0 ? 0 : (v[i] - v[i - 1]) / (t[i] - t[i - 1]);
+            double after = i == t.length - 1 ? 0 : (v[i + 1] - v[i]) / (t[i + 1] - t[i]);
+            boolean isSharp = Math.abs(after - before) > SHARP_CORNER * Math.max(Math.abs(before), Math.abs(after));
+            out.add(new double[] {t[i], isSharp ? 1 : 0});
+        }
     }
 
     // ---------------------------------------------------------------- DC operating point
