@@ -27,10 +27,16 @@ import org.ringsweep.runner.engine.FailureKind;
  *     {@code i1(t) = v1(t)/Z0 − [v2(t−TD)/Z0 + i2(t−TD)]} and the same with the ports swapped,
  *     the delayed values interpolated linearly in the stored history: the delay is exact, not
  *     rounded to the step. At DC a line is a direct connection of its ports.</li>
- * <li>Time step {@code h = min(maxStep, shortest delay / 2)}, so every delayed value lies at
- *     least one step in the past; breakpoints (PWL corners, timed-resistor corners, the stop
- *     time) are hit exactly, a step that would end within 1 % of a step before one is stretched
- *     to it.</li>
+ * <li>Largest step {@code h = min(maxStep, 0.98 · shortest delay)}, so every delayed value lies
+ *     in the accepted past; breakpoints (PWL corners, timed-resistor corners, table-scale corners,
+ *     the stop time) are hit exactly, a step that would end within 1 % of a step before one is
+ *     stretched to it.</li>
+ * <li>Step control: after each trapezoidal step the local truncation error is estimated from
+ *     the difference to the quadratic through the last three points (Milne's device); above
+ *     {@value #LTE_RELATIVE} of the largest source voltage the step is redone at half the size
+ *     (down to h/2^{@value #MAX_HALVINGS}), and it doubles back while the estimate stays under a
+ *     tenth of that. The last {@value #FACTOR_CACHE} factorisations are kept by rule, step and
+ *     conductances, so switching between step sizes does not re-factor each time.</li>
  * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each sharp breakpoint (the
  *     slope changing by more than {@value #SHARP_CORNER} of itself: a ramp's start or end, not
  *     the points of a finely sampled curve) damp the trapezoidal rule's numerical ringing at a
@@ -54,11 +60,13 @@ import org.ringsweep.runner.engine.FailureKind;
  *     of the previous iterate (not asked of the first) and every linearised diode current matches
  *     the Shockley current at the new voltages (SPICE's current test). Without diodes
  *     one solve per step; the factorisation is reused until the step, the integration rule or a
- *     timed resistor's value changes.</li>
+ *     timed resistor's value changes (by more than {@value #TIMED_CHORD} of itself). The solve
+ *     visits only the factors' non-zeros ({@code DenseLu}); a line's history keeps only its
+ *     last delay ({@code LineHistory}).</li>
  * </ul>
  */
 final class TransientSolver {
-    /** Backward-Euler steps after t = 0 and after every breakpoint. */
+    /** Backward-Euler steps after t = 0 and after every sharp breakpoint. */
     static final int DAMPED_STEPS = 2;
     /** Newton iterations per time point before the solve gives up. */
     static final int MAX_NEWTON = 150;
@@ -82,6 +90,26 @@ final class TransientSolver {
     static final int TABLE_FREE_ITERATIONS = 8;
     /** Relative slope change that makes a source corner sharp (a restart of the damped steps). */
     static final double SHARP_CORNER = 0.5;
+    /**
+     * Relative change of a timed resistor's conductance below which the factored value is kept
+     * (a current error under 1e-6 of the resistor's, far inside {@code reltol}).
+     */
+    static final double TIMED_CHORD = 1e-6;
+    /**
+     * The largest step as a fraction of the shortest line delay: under one delay, so every delayed
+     * value a line needs lies in the accepted past (also after a step stretched by 1 % onto a breakpoint).
+     */
+    static final double LINE_STEP = 0.98;
+    /** Factorisations kept for reuse (rules × step sizes). */
+    static final int FACTOR_CACHE = 6;
+    /**
+     * Local truncation error allowed per trapezoidal step, relative to the largest source voltage:
+     * a step whose estimate exceeds it is redone at half the step, and the step doubles back
+     * (never beyond the largest step) when the estimate falls under a tenth of it.
+     */
+    static final double LTE_RELATIVE = 5e-4;
+    /** The smallest step is the largest one over 2^this. */
+    static final int MAX_HALVINGS = 5;
     /** How many steps between two looks at the wall clock. */
     private static final int CLOCK_EVERY = 64;
 
@@ -139,6 +167,12 @@ final class TransientSolver {
     private final double[] dioIeq;
     private final double[] lineIh;
     private final double[] trG;
+    /** Per source: its DC value, or its PWL table (null for DC) and the segment last used. */
+    private final double[] srcDc;
+    private final PwlTable[] srcPwl;
+    private final int[] srcSeg;
+    private final PwlTable[] trTable;
+    private final int[] trSeg;
     private final double[] tabIter;
     private final int[] tabIterSeg;
     private final int[] tabKSeg;
@@ -153,11 +187,22 @@ final class TransientSolver {
 
     // Factorisation cache for the transient system.
     private final double[] matrix;
-    private final DenseLu lu;
-    private boolean factored;
-    private Rule factoredRule;
-    private double factoredH;
+    /**
+     * The last few factorisations, each for a rule, a step and a generation of the conductances
+     * that do not depend on the step (timed resistors, linearised diodes and tables): a solve
+     * switching between a few step sizes factors each once while those stay the same.
+     */
+    private final DenseLu[] lus = new DenseLu[FACTOR_CACHE];
+    private final Rule[] luRule = new Rule[FACTOR_CACHE];
+    private final double[] luH = new double[FACTOR_CACHE];
+    private final long[] luGeneration = new long[FACTOR_CACHE];
+    private final long[] luUsed = new long[FACTOR_CACHE];
+    private DenseLu lu;
+    private long generation;
+    private long uses;
     private final double[] factoredTrG;
+    /** The spare right-hand side / solution vector (swapped with {@link #x}). */
+    private double[] spare;
     private int factorCount;
 
     TransientSolver(Circuit circuit, Netlist net, long deadlineNanos) {
@@ -225,20 +270,43 @@ final class TransientSolver {
         dioIeq = new double[dio.length];
         lineIh = new double[2 * line.length];
         trG = new double[tres.length];
+        srcDc = new double[src.length];
+        srcPwl = new PwlTable[src.length];
+        srcSeg = new int[src.length];
+        for (int k = 0; k < src.length; k++) {
+            if (srcEl[k] instanceof Primitive.PwlVoltage pwl) {
+                srcPwl[k] = new PwlTable(pwl.times(), pwl.volts());
+            } else {
+                srcDc[k] = ((Primitive.DcVoltage) srcEl[k]).volts();
+            }
+        }
+        trTable = new PwlTable[tres.length];
+        trSeg = new int[tres.length];
+        for (int k = 0; k < tres.length; k++) {
+            trTable[k] = new PwlTable(tresEl[k].times(), tresEl[k].ohms());
+        }
         factoredTrG = new double[tres.length];
         matrix = new double[size * size];
-        lu = new DenseLu(size);
+        Arrays.fill(luGeneration, -1);
+        spare = new double[size];
     }
 
     /** The time step the solve uses (s). */
     double step() {
-        return Math.min(analysis.maxStep(), net.shortestDelay() / 2);
+        return Math.min(analysis.maxStep(), LINE_STEP * net.shortestDelay());
     }
 
     /** How many times the transient matrix was factored (for the benchmark's notes). */
     int factorCount() {
         return factorCount;
     }
+
+    /** How many steps were redone at half the size for their truncation error. */
+    int rejectedSteps() {
+        return rejected;
+    }
+
+    private int rejected;
 
     /**
      * Runs the analysis.
@@ -268,14 +336,23 @@ final class TransientSolver {
         int next = 0;
         double tiny = 1e-6 * h;
         double[] delayed = new double[4];
+        double lteTol = LTE_RELATIVE * referenceVoltage();
+        double[] saved = new double[size];
+        double[] back1 = new double[nodes];
+        double[] back2 = new double[nodes];
+        double t1 = 0;
+        double t2 = 0;
+        int smooth = 1; // accepted points since the last sharp corner, that one included
+        int halvings = 0;
         while (t < stop - tiny) {
             while (breaks[next] <= t + tiny) {
                 next++;
             }
             double bp = breaks[next];
-            double tn = t + h;
+            double hTry = h / (1 << halvings);
+            double tn = t + hTry;
             boolean corner = false;
-            if (tn >= bp - 0.01 * h) {
+            if (tn >= bp - 0.01 * hTry) {
                 tn = bp;
                 corner = sharp[next];
             }
@@ -287,14 +364,37 @@ final class TransientSolver {
                 lineIh[2 * l + 1] = lineG[l] * delayed[0] + delayed[1];
             }
             for (int k = 0; k < tres.length; k++) {
-                trG[k] = 1 / tresEl[k].ohmsAt(tn);
+                trSeg[k] = trTable[k].segmentOf(tn, trSeg[k]);
+                double g = 1 / trTable[k].value(tn, trSeg[k]);
+                if (Math.abs(g - trG[k]) > TIMED_CHORD * Math.abs(trG[k])) {
+                    trG[k] = g; // else the factored value stands: a slow creep need not re-factor every step
+                }
             }
             scales(tn);
+            System.arraycopy(x, 0, saved, 0, size);
             if (!newton(rule, dt, tn, 1.0)) {
                 throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
                         + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
             }
+            double ratio = rule == Rule.TRAPEZOID && smooth >= 3 ? truncationError(saved, t, back1, t1, back2, t2, tn) / lteTol : 0;
+            if (ratio > 1 && halvings < MAX_HALVINGS) {
+                // Redo the step at half the size: nothing of it was accepted (the state moves only in accept).
+                System.arraycopy(saved, 0, x, 0, size);
+                halvings++;
+                rejected++;
+                continue;
+            }
+            if (ratio < 0.1 && halvings > 0 && !corner) {
+                halvings--; // the error grows as h³: a doubled step stays under the tolerance
+            }
             accept(rule, dt, tn);
+            double[] spareBack = back2;
+            back2 = back1;
+            back1 = spareBack;
+            System.arraycopy(saved, 0, back1, 0, nodes);
+            t2 = t1;
+            t1 = t;
+            smooth = corner ? 1 : smooth + 1;
             if (count == times.length) {
                 times = Arrays.copyOf(times, count * 2);
                 for (int i = 0; i < out.length; i++) {
@@ -329,6 +429,45 @@ final class TransientSolver {
         for (int i = 0; i < probeIndex.length; i++) {
             out[i][at] = probeIndex[i] < 0 ? 0 : x[probeIndex[i]];
         }
+    }
+
+    /**
+     * The trapezoidal rule's local truncation error estimate (V) of the step from t0 to tn, the
+     * largest over the nodes: the difference between the solution and the quadratic through the
+     * last three accepted points (Milne's device), scaled by the ratio of the two methods' error
+     * constants, {@code (h³/12) / (h(h+h₁)(h+h₁+h₂)/6 − h³/12)} for the trapezoid's
+     * {@code −h³·v‴/12} and the extrapolation's {@code v‴/6·Π(tn − tᵢ)}.
+     */
+    private double truncationError(double[] x0, double t0, double[] x1, double t1, double[] x2, double t2, double tn) {
+        double a = tn - t0;
+        double b = tn - t1;
+        double c = tn - t2;
+        double l0 = b * c / ((t0 - t1) * (t0 - t2));
+        double l1 = a * c / ((t1 - t0) * (t1 - t2));
+        double l2 = a * b / ((t2 - t0) * (t2 - t1));
+        double trap = a * a * a / 12;
+        double factor = trap / (a * b * c / 6 - trap);
+        double worst = 0;
+        for (int i = 0; i < nodes; i++) {
+            double predicted = l0 * x0[i] + l1 * x1[i] + l2 * x2[i];
+            worst = Math.max(worst, Math.abs(x[i] - predicted));
+        }
+        return worst * factor;
+    }
+
+    /** The largest magnitude of any source voltage (V), at least 1 mV: the scale of the truncation error tolerance. */
+    private double referenceVoltage() {
+        double v = 1e-3;
+        for (Primitive p : srcEl) {
+            if (p instanceof Primitive.PwlVoltage pwl) {
+                for (double u : pwl.volts()) {
+                    v = Math.max(v, Math.abs(u));
+                }
+            } else {
+                v = Math.max(v, Math.abs(((Primitive.DcVoltage) p).volts()));
+            }
+        }
+        return v;
     }
 
     /** Each table's scale at time {@code t}. */
@@ -437,7 +576,7 @@ final class TransientSolver {
         for (int l = 0; l < line.length; l++) {
             int[] n = line[l];
             double j = sol[size + l];
-            history[l] = new LineHistory();
+            history[l] = new LineHistory(lineTd[l]);
             history[l].add(0, v(x, n[0]) - v(x, n[1]), j, v(x, n[2]) - v(x, n[3]), -j);
         }
         System.arraycopy(dioIter, 0, dioV, 0, dio.length);
@@ -489,23 +628,10 @@ final class TransientSolver {
     private boolean newton(Rule rule, double h, double t, double scale) {
         this.rule = rule;
         this.h = h;
-        double[] b = new double[size];
+        double[] b = spare;
         for (int iter = 0; iter < MAX_NEWTON; iter++) {
             boolean limited = linearise(x, iter, true);
-            if (needsFactor(rule, h)) {
-                Arrays.fill(matrix, 0);
-                stampLinear(matrix, size, rule, h);
-                stampNonlinear(matrix, size);
-                int bad = lu.factor(matrix);
-                if (bad >= 0) {
-                    throw singular(bad, "at t = `" + t + "` s");
-                }
-                factorCount++;
-                factored = true;
-                factoredRule = rule;
-                factoredH = h;
-                System.arraycopy(trG, 0, factoredTrG, 0, trG.length);
-            }
+            factorFor(rule, h, t);
             Arrays.fill(b, 0);
             stampSources(b, t, scale);
             stampHistory(b, rule, h);
@@ -515,6 +641,7 @@ final class TransientSolver {
             double[] previous = x;
             x = b;
             b = previous;
+            spare = previous;
             if (!nonlinear() || converged) {
                 return true;
             }
@@ -522,9 +649,39 @@ final class TransientSolver {
         return false;
     }
 
-    private boolean needsFactor(Rule rule, double h) {
-        boolean stale = !factored || rule != factoredRule || h != factoredH || !Arrays.equals(trG, factoredTrG);
-        return stale || nonlinearChanged;
+    /** Makes {@link #lu} the factorisation of the transient matrix for this rule and step, from the cache or new. */
+    private void factorFor(Rule rule, double h, double t) {
+        if (nonlinearChanged || !Arrays.equals(trG, factoredTrG)) {
+            generation++;
+            System.arraycopy(trG, 0, factoredTrG, 0, trG.length);
+        }
+        int oldest = 0;
+        for (int i = 0; i < FACTOR_CACHE; i++) {
+            if (luGeneration[i] == generation && luRule[i] == rule && luH[i] == h) {
+                luUsed[i] = ++uses;
+                lu = lus[i];
+                return;
+            }
+            if (luUsed[i] < luUsed[oldest]) {
+                oldest = i;
+            }
+        }
+        if (lus[oldest] == null) {
+            lus[oldest] = new DenseLu(size);
+        }
+        Arrays.fill(matrix, 0);
+        stampLinear(matrix, size, rule, h);
+        stampNonlinear(matrix, size);
+        int bad = lus[oldest].factor(matrix);
+        if (bad >= 0) {
+            throw singular(bad, "at t = `" + t + "` s");
+        }
+        factorCount++;
+        luGeneration[oldest] = generation;
+        luRule[oldest] = rule;
+        luH[oldest] = h;
+        luUsed[oldest] = ++uses;
+        lu = lus[oldest];
     }
 
     /**
@@ -694,8 +851,11 @@ final class TransientSolver {
 
     private void stampSources(double[] b, double t, double scale) {
         for (int k = 0; k < src.length; k++) {
-            Primitive p = srcEl[k];
-            double value = p instanceof Primitive.PwlVoltage pwl ? pwl.valueAt(t) : ((Primitive.DcVoltage) p).volts();
+            double value = srcDc[k];
+            if (srcPwl[k] != null) {
+                srcSeg[k] = srcPwl[k].segmentOf(t, srcSeg[k]);
+                value = srcPwl[k].value(t, srcSeg[k]);
+            }
             b[src[k][2]] += scale * value;
         }
     }
