@@ -15,6 +15,8 @@ final class LineHistory {
     private double[] time = new double[64];
     /** Per point: v1, i1, v2, i2 (port voltages and currents into the line). */
     private double[] values = new double[4 * 64];
+    /** Capacity − 1 (the capacity is a power of two). */
+    private int mask = 63;
     /** Physical index of the oldest kept point, and the number kept. */
     private int head;
     private int size;
@@ -64,15 +66,19 @@ final class LineHistory {
             return;
         }
         int j = Math.min(cursor, size - 2);
-        while (j > 0 && time[physical(j)] > t) {
-            j--;
-        }
-        while (j + 2 < size && time[physical(j + 1)] <= t) {
-            j++;
+        int a = physical(j);
+        int b = (a + 1) & mask;
+        if (!(time[a] <= t && t < time[b])) {
+            while (j > 0 && time[physical(j)] > t) {
+                j--;
+            }
+            while (j + 2 < size && time[physical(j + 1)] <= t) {
+                j++;
+            }
+            a = physical(j);
+            b = (a + 1) & mask;
         }
         cursor = j;
-        int a = physical(j);
-        int b = physical(j + 1);
         double f = (t - time[a]) / (time[b] - time[a]);
         int ka = 4 * a;
         int kb = 4 * b;
@@ -82,8 +88,7 @@ final class LineHistory {
     }
 
     private int physical(int logical) {
-        int p = head + logical;
-        return p >= time.length ? p - time.length : p;
+        return (head + logical) & mask;
     }
 
     private void grow() {
@@ -98,5 +103,6 @@ final class LineHistory {
         time = t2;
         values = v2;
         head = 0;
+        mask = 2 * n - 1;
     }
 }
