@@ -78,7 +78,7 @@ public final class BuiltinEngine implements SimulationEngine, CircuitEngine {
             TransientSolver solver = new TransientSolver(circuit, net, deadline);
             Waveforms w = solver.solve();
             String log = "builtin: " + net.size() + " unknowns, step " + solver.step() + " s, " + w.size()
-                    + " time points, " + solver.factorCount() + " factorisations, " + solver.rejectedSteps() + " steps redone smaller";
+                    + " time points, " + solver.solveCount() + " solves, " + solver.factorCount() + " factorisations, " + solver.rejectedSteps() + " steps redone smaller";
             return new SimulationOutcome.Success(w, log, elapsed(start));
         } catch (UnsupportedElementException e) {
             return new SimulationOutcome.Failure(FailureKind.UNSUPPORTED, e.getMessage(), "", elapsed(start));

@@ -55,6 +55,18 @@ final class Junction {
     }
 
     /**
+     * {@link #conductance(DiodeModel, double)} from the current at the same voltage, without a
+     * second exponential: {@code IS·e^(V/nVt) = I − gmin·V + IS} in the exponential region.
+     */
+    static double conductance(DiodeModel m, double vd, double current) {
+        double nvt = nvt(m);
+        if (vd >= -5 * nvt) {
+            return (current - GMIN * vd + m.is()) / nvt + GMIN;
+        }
+        return GMIN;
+    }
+
+    /**
      * SPICE3 {@code pnjlim}: limits a new junction voltage so the exponential cannot overflow or
      * oscillate, stepping logarithmically above the critical voltage.
      *

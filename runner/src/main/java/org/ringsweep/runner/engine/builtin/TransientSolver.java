@@ -310,6 +310,13 @@ final class TransientSolver {
 
     private int rejected;
 
+    /** How many linear solves the transient took (Newton iterations over all points). */
+    int solveCount() {
+        return solves;
+    }
+
+    private int solves;
+
     /**
      * Runs the analysis.
      *
@@ -639,6 +646,7 @@ final class TransientSolver {
             stampHistory(b, rule, h);
             stampNonlinearCurrents(b);
             lu.solve(b);
+            solves++;
             boolean converged = !limited && (iter > 0 ? close(b, x, size) : true) && linearisationHolds(b);
             double[] previous = x;
             x = b;
@@ -707,7 +715,8 @@ final class TransientSolver {
                 limited |= vd != proposed;
             }
             dioIter[d] = vd;
-            double g = Junction.conductance(dioM[d], vd);
+            double id = Junction.current(dioM[d], vd);
+            double g = Junction.conductance(dioM[d], vd, id);
             if (dioCap[d] && rule != Rule.DC) {
                 g += (rule == Rule.TRAPEZOID ? 2 : 1) / h * Junction.capacitance(dioM[d], vd);
             }
@@ -715,7 +724,7 @@ final class TransientSolver {
                 dioG[d] = g;
                 nonlinearChanged = true;
             }
-            dioIeq[d] = diodeCurrent(d, vd) - dioG[d] * vd;
+            dioIeq[d] = diodeCurrent(d, vd, id) - dioG[d] * vd;
         }
         for (int k = 0; k < tab.length; k++) {
             double vc;
@@ -757,7 +766,12 @@ final class TransientSolver {
      * charge is conserved whatever the capacitance does in between.
      */
     private double diodeCurrent(int d, double vd) {
-        double i = Junction.current(dioM[d], vd);
+        return diodeCurrent(d, vd, Junction.current(dioM[d], vd));
+    }
+
+    /** {@link #diodeCurrent(int, double)} given the Shockley current {@code junction} at {@code vd}. */
+    private double diodeCurrent(int d, double vd, double junction) {
+        double i = junction;
         if (dioCap[d] && rule != Rule.DC) {
             double dq = Junction.charge(dioM[d], vd) - dioQ[d];
             i += rule == Rule.TRAPEZOID ? 2 * dq / h - dioIc[d] : dq / h;
