@@ -66,8 +66,8 @@ class JunctionCapacitanceTests {
             double i1 = (w.value("in", i) - w.value("k", i)) / r;
             delivered += 0.5 * (i0 + i1) * (w.time(i) - w.time(i - 1));
         }
-        // Into the cathode: the junction voltage goes from −3 V to −0.2 V, so the diode's charge rises by Q(−0.2) − Q(−3) ... with sign:
-        // current into the cathode is current out of the anode side of the junction, −dQ(Vd).
+        // The junction voltage Vd = v(anode) − v(cathode) goes from −3 V to −0.2 V; the current into the
+        // cathode is −dQ(Vd)/dt, so the charge through R is −(Q(−0.2) − Q(−3)).
         double expected = -(charge(cjo, -0.2) - charge(cjo, -3));
         assertEquals(expected, delivered, 0.005 * Math.abs(expected), "charge through R (C)");
     }
