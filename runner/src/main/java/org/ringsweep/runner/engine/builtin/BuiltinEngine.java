@@ -13,13 +13,14 @@ import org.ringsweep.runner.engine.SimulationOutcome;
 /**
  * The in-process transient engine: solves a {@link Circuit} directly (no deck, no process) by
  * modified nodal analysis with fixed-step trapezoidal integration, lossless lines by the method
- * of characteristics, lossy lines as lossless sections with lumped loss, and level-1 diodes by
- * Newton–Raphson. The method and its limits are described on {@code TransientSolver} and
+ * of characteristics, lossy lines as lossless sections with lumped loss, level-1 diodes (with
+ * depletion capacitance) and table-driven current sources by Newton–Raphson. The method and its limits are described on {@code TransientSolver} and
  * {@code Netlist} (this package).
  *
  * <p>Supported: resistors, capacitors, inductors, DC and PWL voltage sources, timed resistors,
- * lossless and lossy lines, diodes without junction capacitance. Sub-circuit text (and a diode
- * with CJO &gt; 0) is refused as {@link FailureKind#UNSUPPORTED}, naming the element.
+ * table-driven current sources (IBIS V–I tables), lossless and lossy lines, diodes (IS, N, RS,
+ * CJO with the SPICE defaults VJ = 1 V, M = 0.5, FC = 0.5). Sub-circuit text is refused as
+ * {@link FailureKind#UNSUPPORTED}, naming the element.
  *
  * <p>Stateless and thread-safe: every solve builds its own matrices.
  */
@@ -77,7 +78,7 @@ public final class BuiltinEngine implements SimulationEngine, CircuitEngine {
             TransientSolver solver = new TransientSolver(circuit, net, deadline);
             Waveforms w = solver.solve();
             String log = "builtin: " + net.size() + " unknowns, step " + solver.step() + " s, " + w.size()
-                    + " time points, " + solver.factorCount() + " factorisations";
+                    + " time points, " + solver.solveCount() + " solves, " + solver.factorCount() + " factorisations, " + solver.rejectedSteps() + " steps redone smaller";
             return new SimulationOutcome.Success(w, log, elapsed(start));
         } catch (UnsupportedElementException e) {
             return new SimulationOutcome.Failure(FailureKind.UNSUPPORTED, e.getMessage(), "", elapsed(start));

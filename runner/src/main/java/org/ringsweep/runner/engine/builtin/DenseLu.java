@@ -3,8 +3,10 @@ package org.ringsweep.runner.engine.builtin;
 /**
  * Dense LU factorisation with partial (row) pivoting, in place, for the small systems of a board
  * net (tens of unknowns). One instance holds one factorisation and its scratch space; it is
- * reused for many right-hand sides while the matrix stays the same. Not thread-safe: each solve
- * owns its instances.
+ * reused for many right-hand sides while the matrix stays the same. A board net's matrix is
+ * sparse (each node touches two or three others), and so mostly are its factors: after each
+ * factorisation the non-zeros of L and U are listed row by row, and a solve visits only those.
+ * Not thread-safe: each solve owns its instances.
  */
 final class DenseLu {
     /** A pivot below this (relative to the largest entry of the matrix) means a singular matrix. */
@@ -14,12 +16,23 @@ final class DenseLu {
     private final double[] lu;
     private final int[] perm;
     private final double[] scratch;
+    /** Row-compressed non-zeros of L (below the diagonal) and U (above it), and U's diagonal. */
+    private final int[] lStart;
+    private final int[] uStart;
+    private int[] cols;
+    private double[] vals;
+    private final double[] diag;
 
     DenseLu(int n) {
         this.n = n;
         this.lu = new double[n * n];
         this.perm = new int[n];
         this.scratch = new double[n];
+        this.lStart = new int[n + 1];
+        this.uStart = new int[n + 1];
+        this.cols = new int[4 * n];
+        this.vals = new double[4 * n];
+        this.diag = new double[n];
     }
 
     /**
@@ -68,7 +81,42 @@ final class DenseLu {
                 }
             }
         }
+        compress();
         return -1;
+    }
+
+    /** Lists the factors' non-zeros: for row i, L's at [lStart[i], uStart[i]), U's at [uStart[i], lStart[i+1]). */
+    private void compress() {
+        int count = 0;
+        for (double v : lu) {
+            if (v != 0) {
+                count++;
+            }
+        }
+        if (cols.length < count) {
+            cols = new int[count];
+            vals = new double[count];
+        }
+        int k = 0;
+        for (int i = 0; i < n; i++) {
+            int row = i * n;
+            lStart[i] = k;
+            for (int j = 0; j < i; j++) {
+                if (lu[row + j] != 0) {
+                    cols[k] = j;
+                    vals[k++] = lu[row + j];
+                }
+            }
+            uStart[i] = k;
+            for (int j = i + 1; j < n; j++) {
+                if (lu[row + j] != 0) {
+                    cols[k] = j;
+                    vals[k++] = lu[row + j];
+                }
+            }
+            diag[i] = lu[row + i];
+        }
+        lStart[n] = k;
     }
 
     /** Solves A·x = b with the last factorisation; {@code b} is overwritten with x. */
@@ -78,19 +126,17 @@ final class DenseLu {
         }
         for (int i = 0; i < n; i++) {
             double s = scratch[i];
-            int row = i * n;
-            for (int j = 0; j < i; j++) {
-                s -= lu[row + j] * scratch[j];
+            for (int k = lStart[i], end = uStart[i]; k < end; k++) {
+                s -= vals[k] * scratch[cols[k]];
             }
             scratch[i] = s;
         }
         for (int i = n - 1; i >= 0; i--) {
             double s = scratch[i];
-            int row = i * n;
-            for (int j = i + 1; j < n; j++) {
-                s -= lu[row + j] * scratch[j];
+            for (int k = uStart[i], end = lStart[i + 1]; k < end; k++) {
+                s -= vals[k] * scratch[cols[k]];
             }
-            scratch[i] = s / lu[row + i];
+            scratch[i] = s / diag[i];
         }
         System.arraycopy(scratch, 0, b, 0, n);
     }

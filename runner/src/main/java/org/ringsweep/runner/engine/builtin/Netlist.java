@@ -14,7 +14,8 @@ import org.ringsweep.api.circuit.SafeName;
  * A {@link Circuit} compiled to unknown indices for modified nodal analysis: node voltages first
  * ({@code 0 … nodeCount−1}), then one branch current per voltage source and per inductor. Ground
  * is index −1. A lossy line is replaced here by lossless sections with lumped loss
- * ({@link #sectionsFor}); a diode's series resistance gets an internal node. Immutable after
+ * ({@link #sectionsFor}); a diode's series resistance gets an internal node (its junction and
+ * depletion charge sit behind it, as in SPICE). Immutable after
  * construction; shared by nothing but its own solve.
  */
 final class Netlist {
@@ -45,6 +46,9 @@ final class Netlist {
     /** Diodes: the junction's anode (internal when RS &gt; 0) and cathode. */
     final List<int[]> diodeNodes = new ArrayList<>();
     final List<DiodeModel> diodeModels = new ArrayList<>();
+    /** Table-driven current sources: plus, minus, controlling plus, controlling minus. */
+    final List<int[]> tableNodes = new ArrayList<>();
+    final List<Primitive.TableCurrent> tables = new ArrayList<>();
 
     private final Map<String, Integer> nodeIndex = new LinkedHashMap<>();
     private final List<String> nodeNames = new ArrayList<>();
@@ -88,10 +92,13 @@ final class Netlist {
                 lossyLine(t);
             } else if (p instanceof Primitive.Diode d) {
                 diode(d);
+            } else if (p instanceof Primitive.TableCurrent tc) {
+                tableNodes.add(new int[] {node(tc.plus()), node(tc.minus()), node(tc.ctrlPlus()), node(tc.ctrlMinus())});
+                tables.add(tc);
             } else if (p instanceof Primitive.SubcircuitText s) {
                 throw new UnsupportedElementException("element `" + s.name() + "` is sub-circuit text, which only ngspice"
                         + " can simulate; the built-in engine solves resistors, capacitors, inductors, DC and PWL sources,"
-                        + " timed resistors, transmission lines and diodes");
+                        + " timed resistors, table-driven current sources, transmission lines and diodes");
             } else {
                 throw new UnsupportedElementException("element `" + p.name() + "` (" + p.getClass().getSimpleName()
                         + ") is not supported by the built-in engine");
@@ -214,10 +221,6 @@ final class Netlist {
 
     private void diode(Primitive.Diode d) {
         DiodeModel m = d.model();
-        if (m.cjo() > 0) {
-            throw new UnsupportedElementException("diode `" + d.name() + "` has junction capacitance CJO = `" + m.cjo()
-                    + "` F; the built-in engine models diodes without capacitance (CJO = 0) only");
-        }
         int anode = node(d.anode());
         int junction = anode;
         if (m.rs() > 0) {

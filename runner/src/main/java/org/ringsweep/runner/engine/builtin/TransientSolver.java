@@ -27,25 +27,46 @@ import org.ringsweep.runner.engine.FailureKind;
  *     {@code i1(t) = v1(t)/Z0 − [v2(t−TD)/Z0 + i2(t−TD)]} and the same with the ports swapped,
  *     the delayed values interpolated linearly in the stored history: the delay is exact, not
  *     rounded to the step. At DC a line is a direct connection of its ports.</li>
- * <li>Time step {@code h = min(maxStep, shortest delay / 2)}, so every delayed value lies at
- *     least one step in the past; breakpoints (PWL corners, timed-resistor corners, the stop
- *     time) are hit exactly, a step that would end within 1 % of a step before one is stretched
- *     to it.</li>
- * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each breakpoint damp the
- *     trapezoidal rule's numerical ringing at a corner of a source.</li>
+ * <li>Largest step {@code h = min(maxStep, shortest delay / 2)}, so every delayed value lies
+ *     at least one step in the accepted past; breakpoints (PWL corners, timed-resistor corners, table-scale corners,
+ *     the stop time) are hit exactly, a step that would end within 1 % of a step before one is
+ *     stretched to it.</li>
+ * <li>Step control: after each trapezoidal step the local truncation error is estimated from
+ *     the difference to the quadratic through the last three points (Milne's device); above
+ *     {@value #LTE_RELATIVE} of the largest source voltage the step is redone at half the size
+ *     (down to h/2^{@value #MAX_HALVINGS}), and it doubles back while the estimate stays under a
+ *     tenth of that. The last {@value #FACTOR_CACHE} factorisations are kept by rule, step and
+ *     conductances, so switching between step sizes does not re-factor each time.</li>
+ * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each sharp breakpoint (the
+ *     slope changing by more than {@value #SHARP_CORNER} of itself: a ramp's start or end, not
+ *     the points of a finely sampled curve) damp the trapezoidal rule's numerical ringing at a
+ *     corner of a source.</li>
+ * <li>Table-driven current sources ({@link Primitive.TableCurrent}, the IBIS V–I tables): a
+ *     voltage-controlled current source linearised at the iterate, {@code g = s(t)·dy/dv} of the
+ *     table segment holding the controlling voltage, {@code Ieq = s(t)·y(v) − g·v}. For the first
+ *     {@value #TABLE_FREE_ITERATIONS} iterations the controlling voltage goes wherever Newton puts
+ *     it; after them an iteration stops on the next table point and continues with the slope
+ *     beyond it (the slope is discontinuous at table points, and two segments could otherwise
+ *     send the iterate back and forth). The scale's corner times are breakpoints. Tables take
+ *     part in the DC operating point at their t = 0 scale.</li>
+ * <li>Diode junction capacitance (CJO &gt; 0): the SPICE depletion charge
+ *     ({@link Junction#charge}), integrated with the step's rule from the charge
+ *     ({@code i = (q − qₙ)/h}, or {@code 2(q − qₙ)/h − iₙ}), linearised with {@code Cj(v)·(1 or 2)/h}.</li>
  * <li>Diodes: Newton–Raphson with SPICE's {@code pnjlim} limiting. The factored matrix is reused
- *     while each diode's conductance stays within {@value #CHORD_RELATIVE} (relative) plus
+ *     while each diode's (and table's) conductance stays within {@value #CHORD_RELATIVE} (relative) plus
  *     {@value #CHORD_ABSOLUTE} S of the factored one (a chord iteration; its right-hand side
  *     uses the true junction current, so its fixed point is the exact solution). A point is
  *     accepted when no voltage was limited, the solution moved within {@code reltol}/{@code vntol}
  *     of the previous iterate (not asked of the first) and every linearised diode current matches
  *     the Shockley current at the new voltages (SPICE's current test). Without diodes
  *     one solve per step; the factorisation is reused until the step, the integration rule or a
- *     timed resistor's value changes.</li>
+ *     timed resistor's value changes (by more than {@value #TIMED_CHORD} of itself). The solve
+ *     visits only the factors' non-zeros ({@code DenseLu}); a line's history keeps only its
+ *     last delay ({@code LineHistory}).</li>
  * </ul>
  */
 final class TransientSolver {
-    /** Backward-Euler steps after t = 0 and after every breakpoint. */
+    /** Backward-Euler steps after t = 0 and after every sharp breakpoint. */
     static final int DAMPED_STEPS = 2;
     /** Newton iterations per time point before the solve gives up. */
     static final int MAX_NEWTON = 150;
@@ -61,6 +82,36 @@ final class TransientSolver {
     static final double CHORD_RELATIVE = 0.05;
     /** Absolute change of a diode's conductance that makes the solver re-factor (S). */
     static final double CHORD_ABSOLUTE = 1e-6;
+    /**
+     * Newton iterations in which a table's controlling voltage may jump to wherever Newton puts
+     * it; after them each iteration may only reach the next table point, so the iterate cannot
+     * swing between two segments whose slopes each send it into the other.
+     */
+    static final int TABLE_FREE_ITERATIONS = 8;
+    /** Relative slope change that makes a source corner sharp (a restart of the damped steps). */
+    static final double SHARP_CORNER = 0.5;
+    /**
+     * Relative change of a timed resistor's conductance below which the factored value is kept
+     * (a current error under 1e-6 of the resistor's, far inside {@code reltol}).
+     */
+    static final double TIMED_CHORD = 1e-6;
+    /**
+     * The largest step as a fraction of the shortest line delay: every delayed value a line needs
+     * then lies at least one step in the accepted past. (Up to one delay would do for that, but
+     * the history's linear interpolation then rounds off what a lossy line's short sections
+     * pass on: 1 % of the swing on a 241 mm lossy line, which no truncation-error estimate sees.)
+     */
+    static final double LINE_STEP = 0.5;
+    /** Factorisations kept for reuse (rules × step sizes). */
+    static final int FACTOR_CACHE = 6;
+    /**
+     * Local truncation error allowed per trapezoidal step, relative to the largest source voltage:
+     * a step whose estimate exceeds it is redone at half the step, and the step doubles back
+     * (never beyond the largest step) when the estimate falls under a tenth of it.
+     */
+    static final double LTE_RELATIVE = 2e-4;
+    /** The smallest step is the largest one over 2^this. */
+    static final int MAX_HALVINGS = 5;
     /** How many steps between two looks at the wall clock. */
     private static final int CLOCK_EVERY = 64;
 
@@ -91,6 +142,11 @@ final class TransientSolver {
     private final DiodeModel[] dioM;
     private final double[] dioNvt;
     private final double[] dioCrit;
+    private final boolean[] dioCap;
+    private final int[][] tab;
+    private final PwlTable[] tabY;
+    /** The scale of each table in time, or null for a constant 1. */
+    private final PwlTable[] tabK;
 
     // State of the last accepted point.
     private double[] x;
@@ -100,6 +156,12 @@ final class TransientSolver {
     private final double[] indJ;
     private final LineHistory[] history;
     private final double[] dioV;
+    /** Depletion charge (C) and its current (A) at the last accepted point, per diode. */
+    private final double[] dioQ;
+    private final double[] dioIc;
+    /** Controlling voltage and its table segment at the last accepted point, per table. */
+    private final double[] tabV;
+    private final int[] tabSeg;
 
     // Per-iteration scratch.
     private final double[] dioIter;
@@ -107,14 +169,42 @@ final class TransientSolver {
     private final double[] dioIeq;
     private final double[] lineIh;
     private final double[] trG;
+    /** Per source: its DC value, or its PWL table (null for DC) and the segment last used. */
+    private final double[] srcDc;
+    private final PwlTable[] srcPwl;
+    private final int[] srcSeg;
+    private final PwlTable[] trTable;
+    private final int[] trSeg;
+    private final double[] tabIter;
+    private final int[] tabIterSeg;
+    private final int[] tabKSeg;
+    /** Each table's scale at the time point being solved. */
+    private final double[] tabS;
+    private final double[] tabG;
+    private final double[] tabIeq;
+    /** The rule and step of the point being solved (the diodes' charge companion depends on them). */
+    private Rule rule = Rule.DC;
+    private double h;
+    private boolean nonlinearChanged;
 
     // Factorisation cache for the transient system.
     private final double[] matrix;
-    private final DenseLu lu;
-    private boolean factored;
-    private Rule factoredRule;
-    private double factoredH;
+    /**
+     * The last few factorisations, each for a rule, a step and a generation of the conductances
+     * that do not depend on the step (timed resistors, linearised diodes and tables): a solve
+     * switching between a few step sizes factors each once while those stay the same.
+     */
+    private final DenseLu[] lus = new DenseLu[FACTOR_CACHE];
+    private final Rule[] luRule = new Rule[FACTOR_CACHE];
+    private final double[] luH = new double[FACTOR_CACHE];
+    private final long[] luGeneration = new long[FACTOR_CACHE];
+    private final long[] luUsed = new long[FACTOR_CACHE];
+    private DenseLu lu;
+    private long generation;
+    private long uses;
     private final double[] factoredTrG;
+    /** The spare right-hand side / solution vector (swapped with {@link #x}). */
+    private double[] spare;
     private int factorCount;
 
     TransientSolver(Circuit circuit, Netlist net, long deadlineNanos) {
@@ -149,6 +239,28 @@ final class TransientSolver {
             dioNvt[d] = Junction.nvt(dioM[d]);
             dioCrit[d] = Junction.criticalVoltage(dioM[d]);
         }
+        dioCap = new boolean[dioM.length];
+        for (int d = 0; d < dioM.length; d++) {
+            dioCap[d] = dioM[d].cjo() > 0;
+        }
+        tab = net.tableNodes.toArray(new int[0][]);
+        tabY = new PwlTable[tab.length];
+        tabK = new PwlTable[tab.length];
+        for (int k = 0; k < tab.length; k++) {
+            Primitive.TableCurrent tc = net.tables.get(k);
+            tabY[k] = new PwlTable(tc.x(), tc.y());
+            tabK[k] = tc.scaleTimes().length == 0 ? null : new PwlTable(tc.scaleTimes(), tc.scale());
+        }
+        dioQ = new double[dio.length];
+        dioIc = new double[dio.length];
+        tabV = new double[tab.length];
+        tabSeg = new int[tab.length];
+        tabIter = new double[tab.length];
+        tabIterSeg = new int[tab.length];
+        tabKSeg = new int[tab.length];
+        tabS = new double[tab.length];
+        tabG = new double[tab.length];
+        tabIeq = new double[tab.length];
         capV = new double[cap.length];
         capI = new double[cap.length];
         indV = new double[ind.length];
@@ -160,20 +272,50 @@ final class TransientSolver {
         dioIeq = new double[dio.length];
         lineIh = new double[2 * line.length];
         trG = new double[tres.length];
+        srcDc = new double[src.length];
+        srcPwl = new PwlTable[src.length];
+        srcSeg = new int[src.length];
+        for (int k = 0; k < src.length; k++) {
+            if (srcEl[k] instanceof Primitive.PwlVoltage pwl) {
+                srcPwl[k] = new PwlTable(pwl.times(), pwl.volts());
+            } else {
+                srcDc[k] = ((Primitive.DcVoltage) srcEl[k]).volts();
+            }
+        }
+        trTable = new PwlTable[tres.length];
+        trSeg = new int[tres.length];
+        for (int k = 0; k < tres.length; k++) {
+            trTable[k] = new PwlTable(tresEl[k].times(), tresEl[k].ohms());
+        }
         factoredTrG = new double[tres.length];
         matrix = new double[size * size];
-        lu = new DenseLu(size);
+        Arrays.fill(luGeneration, -1);
+        spare = new double[size];
     }
 
     /** The time step the solve uses (s). */
     double step() {
-        return Math.min(analysis.maxStep(), net.shortestDelay() / 2);
+        return Math.min(analysis.maxStep(), LINE_STEP * net.shortestDelay());
     }
 
     /** How many times the transient matrix was factored (for the benchmark's notes). */
     int factorCount() {
         return factorCount;
     }
+
+    /** How many steps were redone at half the size for their truncation error. */
+    int rejectedSteps() {
+        return rejected;
+    }
+
+    private int rejected;
+
+    /** How many linear solves the transient took (Newton iterations over all points). */
+    int solveCount() {
+        return solves;
+    }
+
+    private int solves;
 
     /**
      * Runs the analysis.
@@ -203,16 +345,25 @@ final class TransientSolver {
         int next = 0;
         double tiny = 1e-6 * h;
         double[] delayed = new double[4];
+        double lteTol = LTE_RELATIVE * referenceVoltage();
+        double[] saved = new double[size];
+        double[] back1 = new double[nodes];
+        double[] back2 = new double[nodes];
+        double t1 = 0;
+        double t2 = 0;
+        int smooth = 1; // accepted points since the last sharp corner, that one included
+        int halvings = 0;
         while (t < stop - tiny) {
             while (breaks[next] <= t + tiny) {
                 next++;
             }
             double bp = breaks[next];
-            double tn = t + h;
+            double hTry = h / (1 << halvings);
+            double tn = t + hTry;
             boolean corner = false;
-            if (tn >= bp - 0.01 * h) {
+            if (tn >= bp - 0.01 * hTry) {
                 tn = bp;
-                corner = true;
+                corner = sharp[next];
             }
             double dt = tn - t;
             Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
@@ -222,13 +373,37 @@ final class TransientSolver {
                 lineIh[2 * l + 1] = lineG[l] * delayed[0] + delayed[1];
             }
             for (int k = 0; k < tres.length; k++) {
-                trG[k] = 1 / tresEl[k].ohmsAt(tn);
+                trSeg[k] = trTable[k].segmentOf(tn, trSeg[k]);
+                double g = 1 / trTable[k].value(tn, trSeg[k]);
+                if (Math.abs(g - trG[k]) > TIMED_CHORD * Math.abs(trG[k])) {
+                    trG[k] = g; // else the factored value stands: a slow creep need not re-factor every step
+                }
             }
+            scales(tn);
+            System.arraycopy(x, 0, saved, 0, size);
             if (!newton(rule, dt, tn, 1.0)) {
                 throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
                         + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
             }
+            double ratio = rule == Rule.TRAPEZOID && smooth >= 3 ? truncationError(saved, t, back1, t1, back2, t2, tn) / lteTol : 0;
+            if (ratio > 1 && halvings < MAX_HALVINGS) {
+                // Redo the step at half the size: nothing of it was accepted (the state moves only in accept).
+                System.arraycopy(saved, 0, x, 0, size);
+                halvings++;
+                rejected++;
+                continue;
+            }
+            if (ratio < 0.1 && halvings > 0 && !corner) {
+                halvings--; // the error grows as h³: a doubled step stays under the tolerance
+            }
             accept(rule, dt, tn);
+            double[] spareBack = back2;
+            back2 = back1;
+            back1 = spareBack;
+            System.arraycopy(saved, 0, back1, 0, nodes);
+            t2 = t1;
+            t1 = t;
+            smooth = corner ? 1 : smooth + 1;
             if (count == times.length) {
                 times = Arrays.copyOf(times, count * 2);
                 for (int i = 0; i < out.length; i++) {
@@ -265,33 +440,109 @@ final class TransientSolver {
         }
     }
 
-    /** PWL and timed-resistor corners inside (0, stop), and the stop time; sorted, near-duplicates merged. */
+    /**
+     * The trapezoidal rule's local truncation error estimate (V) of the step from t0 to tn, the
+     * largest over the nodes: the difference between the solution and the quadratic through the
+     * last three accepted points (Milne's device), scaled by the ratio of the two methods' error
+     * constants, {@code (h³/12) / (h(h+h₁)(h+h₁+h₂)/6 − h³/12)} for the trapezoid's
+     * {@code −h³·v‴/12} and the extrapolation's {@code v‴/6·Π(tn − tᵢ)}.
+     */
+    private double truncationError(double[] x0, double t0, double[] x1, double t1, double[] x2, double t2, double tn) {
+        double a = tn - t0;
+        double b = tn - t1;
+        double c = tn - t2;
+        double l0 = b * c / ((t0 - t1) * (t0 - t2));
+        double l1 = a * c / ((t1 - t0) * (t1 - t2));
+        double l2 = a * b / ((t2 - t0) * (t2 - t1));
+        double trap = a * a * a / 12;
+        double factor = trap / (a * b * c / 6 - trap);
+        double worst = 0;
+        for (int i = 0; i < nodes; i++) {
+            double predicted = l0 * x0[i] + l1 * x1[i] + l2 * x2[i];
+            worst = Math.max(worst, Math.abs(x[i] - predicted));
+        }
+        return worst * factor;
+    }
+
+    /** The largest magnitude of any source voltage (V), at least 1 mV: the scale of the truncation error tolerance. */
+    private double referenceVoltage() {
+        double v = 1e-3;
+        for (Primitive p : srcEl) {
+            if (p instanceof Primitive.PwlVoltage pwl) {
+                for (double u : pwl.volts()) {
+                    v = Math.max(v, Math.abs(u));
+                }
+            } else {
+                v = Math.max(v, Math.abs(((Primitive.DcVoltage) p).volts()));
+            }
+        }
+        return v;
+    }
+
+    /** Each table's scale at time {@code t}. */
+    private void scales(double t) {
+        for (int k = 0; k < tab.length; k++) {
+            if (tabK[k] == null) {
+                tabS[k] = 1;
+            } else {
+                tabKSeg[k] = tabK[k].segmentOf(t, tabKSeg[k]);
+                tabS[k] = tabK[k].value(t, tabKSeg[k]);
+            }
+        }
+    }
+
+    /**
+     * PWL, timed-resistor and table-scale corners inside (0, stop), and the stop time; sorted,
+     * near-duplicates merged. Fills {@link #sharp}: whether a corner restarts the damped steps.
+     */
     private double[] breakpoints(double stop, double h) {
-        List<Double> all = new ArrayList<>();
+        List<double[]> all = new ArrayList<>();
         for (Primitive p : srcEl) {
             if (p instanceof Primitive.PwlVoltage v) {
-                for (double t : v.times()) {
-                    all.add(t);
-                }
+                corners(v.times(), v.volts(), all);
             }
         }
         for (Primitive.TimedResistor r : tresEl) {
-            for (double t : r.times()) {
-                all.add(t);
-            }
+            corners(r.times(), r.ohms(), all);
+        }
+        for (Primitive.TableCurrent tc : net.tables) {
+            corners(tc.scaleTimes(), tc.scale(), all);
         }
         double merge = 1e-6 * h;
-        double[] sorted = all.stream().mapToDouble(Double::doubleValue).filter(t -> t > merge && t < stop - merge)
-                .sorted().toArray();
-        double[] out = new double[sorted.length + 1];
+        all.removeIf(c -> !(c[0] > merge && c[0] < stop - merge));
+        all.sort((a, b) -> Double.compare(a[0], b[0]));
+        double[] out = new double[all.size() + 1];
+        sharp = new boolean[all.size() + 1];
         int n = 0;
-        for (double t : sorted) {
-            if (n == 0 || t - out[n - 1] > merge) {
-                out[n++] = t;
+        for (double[] c : all) {
+            if (n == 0 || c[0] - out[n - 1] > merge) {
+                out[n++] = c[0];
             }
+            sharp[n - 1] |= c[1] != 0;
         }
         out[n++] = stop;
+        sharp = Arrays.copyOf(sharp, n);
         return Arrays.copyOf(out, n);
+    }
+
+    /** Whether each breakpoint restarts the damped steps (see {@link #corners}). */
+    private boolean[] sharp;
+
+    /**
+     * Adds the corners of a function of time held outside its points, each as {time, 1 if sharp
+     * else 0}. A corner is sharp when the slope changes there by more than
+     * {@value #SHARP_CORNER} of the larger of its two slopes (a ramp starting or ending); the
+     * corners of a finely sampled smooth curve (an IBIS switching waveform) are hit, but
+     * integrated through with the trapezoidal rule, whose accuracy backward-Euler steps at each of
+     * them would lose.
+     */
+    private static void corners(double[] t, double[] v, List<double[]> out) {
+        for (int i = 0; i < t.length; i++) {
+            double before = i == 0 ? 0 : (v[i] - v[i - 1]) / (t[i] - t[i - 1]);
+            double after = i == t.length - 1 ? 0 : (v[i + 1] - v[i]) / (t[i + 1] - t[i]);
+            boolean isSharp = Math.abs(after - before) > SHARP_CORNER * Math.max(Math.abs(before), Math.abs(after));
+            out.add(new double[] {t[i], isSharp ? 1 : 0});
+        }
     }
 
     // ---------------------------------------------------------------- DC operating point
@@ -305,12 +556,14 @@ final class TransientSolver {
         double[] b = new double[dcSize];
         DenseLu dcLu = new DenseLu(dcSize);
         double[] sol = new double[dcSize];
-        Arrays.fill(dioIter, 0);
+        scales(0);
+        rule = Rule.DC;
+        resetIterates();
         boolean ok = dcNewton(a, b, dcLu, sol, 1.0);
         if (!ok) {
             // Source stepping: ramp the sources up from zero, each solution starting the next.
             Arrays.fill(sol, 0);
-            Arrays.fill(dioIter, 0);
+            resetIterates();
             ok = true;
             for (int s = 1; s <= 20 && ok; s++) {
                 ok = dcNewton(a, b, dcLu, sol, s / 20.0);
@@ -332,13 +585,28 @@ final class TransientSolver {
         for (int l = 0; l < line.length; l++) {
             int[] n = line[l];
             double j = sol[size + l];
-            history[l] = new LineHistory();
+            history[l] = new LineHistory(lineTd[l]);
             history[l].add(0, v(x, n[0]) - v(x, n[1]), j, v(x, n[2]) - v(x, n[3]), -j);
         }
         System.arraycopy(dioIter, 0, dioV, 0, dio.length);
         for (int d = 0; d < dio.length; d++) {
             dioG[d] = Junction.conductance(dioM[d], dioV[d]);
+            dioQ[d] = dioCap[d] ? Junction.charge(dioM[d], dioV[d]) : 0;
+            dioIc[d] = 0;
         }
+        acceptTables();
+    }
+
+    private void resetIterates() {
+        Arrays.fill(dioIter, 0);
+        Arrays.fill(tabIter, 0);
+        for (int k = 0; k < tab.length; k++) {
+            tabIterSeg[k] = tabY[k].segmentOf(0, 0);
+        }
+    }
+
+    private boolean nonlinear() {
+        return dio.length > 0 || tab.length > 0;
     }
 
     private boolean dcNewton(double[] a, double[] b, DenseLu dcLu, double[] sol, double scale) {
@@ -346,20 +614,18 @@ final class TransientSolver {
             boolean limited = linearise(sol, iter, false);
             Arrays.fill(a, 0);
             stampLinear(a, dcSize, Rule.DC, 0);
-            for (int d = 0; d < dio.length; d++) {
-                conductance(a, dcSize, dio[d][0], dio[d][1], dioG[d]);
-            }
+            stampNonlinear(a, dcSize);
             int bad = dcLu.factor(a);
             if (bad >= 0) {
                 throw singular(bad, "at the DC operating point");
             }
             Arrays.fill(b, 0);
             stampSources(b, 0, scale);
-            stampDiodeCurrents(b);
+            stampNonlinearCurrents(b);
             dcLu.solve(b);
-            boolean converged = !limited && (dio.length == 0 || iter > 0) && close(b, sol, dcSize);
+            boolean converged = !limited && (!nonlinear() || iter > 0) && close(b, sol, dcSize);
             System.arraycopy(b, 0, sol, 0, dcSize);
-            if (dio.length == 0 || converged) {
+            if (!nonlinear() || converged) {
                 return true;
             }
         }
@@ -369,57 +635,76 @@ final class TransientSolver {
     // ---------------------------------------------------------------- transient point
 
     private boolean newton(Rule rule, double h, double t, double scale) {
-        double[] b = new double[size];
+        this.rule = rule;
+        this.h = h;
+        double[] b = spare;
         for (int iter = 0; iter < MAX_NEWTON; iter++) {
             boolean limited = linearise(x, iter, true);
-            if (needsFactor(rule, h)) {
-                Arrays.fill(matrix, 0);
-                stampLinear(matrix, size, rule, h);
-                for (int d = 0; d < dio.length; d++) {
-                    conductance(matrix, size, dio[d][0], dio[d][1], dioG[d]);
-                }
-                int bad = lu.factor(matrix);
-                if (bad >= 0) {
-                    throw singular(bad, "at t = `" + t + "` s");
-                }
-                factorCount++;
-                factored = true;
-                factoredRule = rule;
-                factoredH = h;
-                System.arraycopy(trG, 0, factoredTrG, 0, trG.length);
-            }
+            factorFor(rule, h, t);
             Arrays.fill(b, 0);
             stampSources(b, t, scale);
             stampHistory(b, rule, h);
-            stampDiodeCurrents(b);
+            stampNonlinearCurrents(b);
             lu.solve(b);
+            solves++;
             boolean converged = !limited && (iter > 0 ? close(b, x, size) : true) && linearisationHolds(b);
             double[] previous = x;
             x = b;
             b = previous;
-            if (dio.length == 0 || converged) {
+            spare = previous;
+            if (!nonlinear() || converged) {
                 return true;
             }
         }
         return false;
     }
 
-    private boolean needsFactor(Rule rule, double h) {
-        boolean stale = !factored || rule != factoredRule || h != factoredH || !Arrays.equals(trG, factoredTrG);
-        return stale || diodesChanged;
+    /** Makes {@link #lu} the factorisation of the transient matrix for this rule and step, from the cache or new. */
+    private void factorFor(Rule rule, double h, double t) {
+        if (nonlinearChanged || !Arrays.equals(trG, factoredTrG)) {
+            generation++;
+            System.arraycopy(trG, 0, factoredTrG, 0, trG.length);
+        }
+        int oldest = 0;
+        for (int i = 0; i < FACTOR_CACHE; i++) {
+            if (luGeneration[i] == generation && luRule[i] == rule && luH[i] == h) {
+                luUsed[i] = ++uses;
+                lu = lus[i];
+                return;
+            }
+            if (luUsed[i] < luUsed[oldest]) {
+                oldest = i;
+            }
+        }
+        if (lus[oldest] == null) {
+            lus[oldest] = new DenseLu(size);
+        }
+        Arrays.fill(matrix, 0);
+        stampLinear(matrix, size, rule, h);
+        stampNonlinear(matrix, size);
+        int bad = lus[oldest].factor(matrix);
+        if (bad >= 0) {
+            throw singular(bad, "at t = `" + t + "` s");
+        }
+        factorCount++;
+        luGeneration[oldest] = generation;
+        luRule[oldest] = rule;
+        luH[oldest] = h;
+        luUsed[oldest] = ++uses;
+        lu = lus[oldest];
     }
-
-    private boolean diodesChanged;
 
     /**
      * Linearises every diode at the voltage of {@code sol} (limited by pnjlim against the last
-     * linearisation point); keeps a factored conductance while it is close enough.
+     * linearisation point) and every table at its controlling voltage (limited to the next table
+     * point after {@value #TABLE_FREE_ITERATIONS} iterations); keeps a factored conductance while
+     * it is close enough.
      *
      * @return whether any voltage was limited (then the iteration has not converged)
      */
     private boolean linearise(double[] sol, int iter, boolean keepFactored) {
         boolean limited = false;
-        diodesChanged = false;
+        nonlinearChanged = false;
         for (int d = 0; d < dio.length; d++) {
             double vd;
             if (iter == 0 && keepFactored) {
@@ -430,14 +715,76 @@ final class TransientSolver {
                 limited |= vd != proposed;
             }
             dioIter[d] = vd;
-            double g = Junction.conductance(dioM[d], vd);
+            double id = Junction.current(dioM[d], vd);
+            double g = Junction.conductance(dioM[d], vd, id);
+            if (dioCap[d] && rule != Rule.DC) {
+                g += (rule == Rule.TRAPEZOID ? 2 : 1) / h * Junction.capacitance(dioM[d], vd);
+            }
             if (!keepFactored || Math.abs(g - dioG[d]) > CHORD_ABSOLUTE + CHORD_RELATIVE * Math.abs(dioG[d])) {
                 dioG[d] = g;
-                diodesChanged = true;
+                nonlinearChanged = true;
             }
-            dioIeq[d] = Junction.current(dioM[d], vd) - dioG[d] * vd;
+            dioIeq[d] = diodeCurrent(d, vd, id) - dioG[d] * vd;
+        }
+        for (int k = 0; k < tab.length; k++) {
+            double vc;
+            int seg;
+            if (iter == 0 && keepFactored) {
+                vc = tabV[k];
+                seg = tabSeg[k];
+            } else {
+                double proposed = v(sol, tab[k][2]) - v(sol, tab[k][3]);
+                seg = tabIterSeg[k];
+                vc = proposed;
+                if (iter < TABLE_FREE_ITERATIONS) {
+                    seg = tabY[k].segmentOf(proposed, seg);
+                } else if (proposed > tabY[k].upper(seg)) {
+                    // Stop on the next table point, linearised with the slope of the segment beyond it.
+                    vc = tabY[k].upper(seg++);
+                    limited = true;
+                } else if (proposed < tabY[k].lower(seg)) {
+                    vc = tabY[k].lower(seg--);
+                    limited = true;
+                }
+            }
+            tabIter[k] = vc;
+            tabIterSeg[k] = seg;
+            double g = tabS[k] * tabY[k].slope(seg);
+            if (!keepFactored || Math.abs(g - tabG[k]) > CHORD_ABSOLUTE + CHORD_RELATIVE * Math.abs(tabG[k])) {
+                tabG[k] = g;
+                nonlinearChanged = true;
+            }
+            tabIeq[k] = tabS[k] * tabY[k].value(vc, seg) - tabG[k] * vc;
         }
         return limited;
+    }
+
+    /**
+     * A diode's current (A) at junction voltage {@code vd}: the Shockley current and, with CJO &gt; 0
+     * in a transient step, the depletion charge's companion current {@code (q(vd) − qₙ)/h}
+     * (backward Euler) or {@code 2(q(vd) − qₙ)/h − iₙ} (trapezoidal): from the charge, so the
+     * charge is conserved whatever the capacitance does in between.
+     */
+    private double diodeCurrent(int d, double vd) {
+        return diodeCurrent(d, vd, Junction.current(dioM[d], vd));
+    }
+
+    /** {@link #diodeCurrent(int, double)} given the Shockley current {@code junction} at {@code vd}. */
+    private double diodeCurrent(int d, double vd, double junction) {
+        double i = junction;
+        if (dioCap[d] && rule != Rule.DC) {
+            double dq = Junction.charge(dioM[d], vd) - dioQ[d];
+            i += rule == Rule.TRAPEZOID ? 2 * dq / h - dioIc[d] : dq / h;
+        }
+        return i;
+    }
+
+    private void acceptTables() {
+        for (int k = 0; k < tab.length; k++) {
+            tabV[k] = v(x, tab[k][2]) - v(x, tab[k][3]);
+            tabSeg[k] = tabY[k].segmentOf(tabV[k], tabIterSeg[k]);
+            tabIterSeg[k] = tabSeg[k];
+        }
     }
 
     private void accept(Rule rule, double h, double t) {
@@ -458,8 +805,16 @@ final class TransientSolver {
             history[l].add(t, v1, lineG[l] * v1 - lineIh[2 * l], v2, lineG[l] * v2 - lineIh[2 * l + 1]);
         }
         for (int d = 0; d < dio.length; d++) {
-            dioV[d] = v(x, dio[d][0]) - v(x, dio[d][1]);
+            double vd = v(x, dio[d][0]) - v(x, dio[d][1]);
+            if (dioCap[d]) {
+                double q = Junction.charge(dioM[d], vd);
+                double dq = q - dioQ[d];
+                dioIc[d] = rule == Rule.TRAPEZOID ? 2 * dq / h - dioIc[d] : dq / h;
+                dioQ[d] = q;
+            }
+            dioV[d] = vd;
         }
+        acceptTables();
     }
 
     // ---------------------------------------------------------------- stamps
@@ -512,8 +867,11 @@ final class TransientSolver {
 
     private void stampSources(double[] b, double t, double scale) {
         for (int k = 0; k < src.length; k++) {
-            Primitive p = srcEl[k];
-            double value = p instanceof Primitive.PwlVoltage pwl ? pwl.valueAt(t) : ((Primitive.DcVoltage) p).volts();
+            double value = srcDc[k];
+            if (srcPwl[k] != null) {
+                srcSeg[k] = srcPwl[k].segmentOf(t, srcSeg[k]);
+                value = srcPwl[k].value(t, srcSeg[k]);
+            }
             b[src[k][2]] += scale * value;
         }
     }
@@ -536,9 +894,28 @@ final class TransientSolver {
         }
     }
 
-    private void stampDiodeCurrents(double[] b) {
+    /** The linearised diodes' and tables' conductances. */
+    private void stampNonlinear(double[] a, int n) {
+        for (int d = 0; d < dio.length; d++) {
+            conductance(a, n, dio[d][0], dio[d][1], dioG[d]);
+        }
+        for (int k = 0; k < tab.length; k++) {
+            // Current g·(v(cp) − v(cm)) leaving plus and entering minus: a voltage-controlled current source.
+            int[] p = tab[k];
+            double g = tabG[k];
+            add(a, n, p[0], p[2], g);
+            add(a, n, p[0], p[3], -g);
+            add(a, n, p[1], p[2], -g);
+            add(a, n, p[1], p[3], g);
+        }
+    }
+
+    private void stampNonlinearCurrents(double[] b) {
         for (int d = 0; d < dio.length; d++) {
             inject(b, dio[d][1], dio[d][0], dioIeq[d]);
+        }
+        for (int k = 0; k < tab.length; k++) {
+            inject(b, tab[k][1], tab[k][0], tabIeq[k]);
         }
     }
 
@@ -551,7 +928,15 @@ final class TransientSolver {
         for (int d = 0; d < dio.length; d++) {
             double vd = v(sol, dio[d][0]) - v(sol, dio[d][1]);
             double linear = dioG[d] * vd + dioIeq[d];
-            double exact = Junction.current(dioM[d], vd);
+            double exact = diodeCurrent(d, vd);
+            if (!(Math.abs(exact - linear) <= RELTOL * Math.max(Math.abs(exact), Math.abs(linear)) + ABSTOL)) {
+                return false;
+            }
+        }
+        for (int k = 0; k < tab.length; k++) {
+            double vc = v(sol, tab[k][2]) - v(sol, tab[k][3]);
+            double linear = tabG[k] * vc + tabIeq[k];
+            double exact = tabS[k] * tabY[k].value(vc, tabY[k].segmentOf(vc, tabIterSeg[k]));
             if (!(Math.abs(exact - linear) <= RELTOL * Math.max(Math.abs(exact), Math.abs(linear)) + ABSTOL)) {
                 return false;
             }

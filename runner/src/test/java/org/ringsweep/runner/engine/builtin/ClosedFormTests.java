@@ -199,15 +199,4 @@ class ClosedFormTests {
         SimulationOutcome.Failure f = assertInstanceOf(SimulationOutcome.Failure.class, o);
         assertEquals(FailureKind.TIMEOUT, f.kind());
     }
-
-    @Test
-    void aDiodeWithJunctionCapacitanceIsRefusedNamingIt() {
-        SimulationOutcome o = new BuiltinEngine().solve(Circuits.of(List.of(
-                new Primitive.DcVoltage("vs", "src", "0", 1),
-                new Primitive.Diode("dcap", "src", "0", new DiodeModel("dm", 1e-14, 1, 1, 1e-12))),
-                new Transient(10e-12, 1e-9, 10e-12), "src"), Duration.ofSeconds(5));
-        SimulationOutcome.Failure f = assertInstanceOf(SimulationOutcome.Failure.class, o);
-        assertEquals(FailureKind.UNSUPPORTED, f.kind());
-        assertTrue(f.message().contains("`dcap`"), f.message());
-    }
 }

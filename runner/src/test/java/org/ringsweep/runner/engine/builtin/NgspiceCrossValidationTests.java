@@ -18,6 +18,9 @@ import net.jqwik.api.ShrinkingMode;
 import net.jqwik.api.Tuple;
 import net.jqwik.api.lifecycle.AfterContainer;
 import net.jqwik.api.statistics.Statistics;
+import org.ringsweep.api.circuit.Circuit;
+import org.ringsweep.api.circuit.DiodeModel;
+import org.ringsweep.api.circuit.Primitive;
 import org.ringsweep.api.wave.Waveforms;
 import org.ringsweep.generators.deck.DeckOptions;
 import org.ringsweep.generators.deck.DeckWriter;
@@ -38,7 +41,9 @@ import org.ringsweep.runner.testing.Ngspice;
 
 /**
  * Property: on random board nets (RandomNets: point-to-point, tees, daisy chains, open stubs;
- * series, parallel, VTT, Thevenin and RC terminations; clamps; lossy segments), elaborated by the
+ * series, parallel, VTT, Thevenin and RC terminations; clamps, some with junction capacitance;
+ * lossy segments; ramp drivers and, one net in four, the IBIS io33 driver of the demo board's
+ * parts/kx32.ibs, whose V–I tables are table-driven current sources), elaborated by the
  * real {@link Elaborator}, the built-in engine agrees with ngspice (the reference simulator, run
  * through the real {@link DeckWriter} and {@link NgspiceEngine}) on every receiver edge measured
  * by {@link EdgeMeasurer}: v_max and v_min within 1 % of the swing, the first threshold crossing
@@ -76,43 +81,88 @@ class NgspiceCrossValidationTests {
         return Arbitraries.frequency(Tuple.of(5, false), Tuple.of(1, true));
     }
 
+    /** One net in four is driven by the IBIS io33 buffer (table-driven current sources). */
+    @Provide
+    Arbitrary<Boolean> ibisDriver() {
+        return Arbitraries.frequency(Tuple.of(3, false), Tuple.of(1, true));
+    }
+
+    /** Clamp junction capacitance (F): none in half the nets, else 0.2 to 4 pF. */
+    @Provide
+    Arbitrary<Double> clampCjo() {
+        return Arbitraries.frequency(Tuple.of(1, 0.0), Tuple.of(1, 1.0)).flatMap(on -> on == 0
+                ? Arbitraries.just(0.0) : Arbitraries.doubles().between(0.2, 4).ofScale(3).map(pf -> pf * 1e-12));
+    }
+
     @Property(seed = "20261202", shrinking = ShrinkingMode.OFF)
     void builtinEngineAgreesWithNgspiceOnRandomNets(@ForAll RandomNets.Topology topology,
                                                     @ForAll RandomNets.Termination termination,
                                                     @ForAll boolean clamps,
+                                                    @ForAll("clampCjo") double cjo,
                                                     @ForAll("lossy") boolean lossy,
+                                                    @ForAll("ibisDriver") boolean ibis,
                                                     @ForAll("seeds") long seed) throws IOException {
         Path ngspice = Ngspice.require();
-        String yaml = RandomNets.yaml(topology, termination, clamps, lossy, seed);
+        String yaml = RandomNets.yaml(topology, termination, clamps, lossy, ibis, seed);
+        if (clamps && cjo > 0) {
+            yaml += "# clamp CJO " + cjo + " F\n";
+        }
         Path dir = Files.createTempDirectory("builtin-cross");
         try {
             Path file = dir.resolve("net.yaml");
             Files.writeString(file, yaml);
             Elaboration e = new Elaborator().elaborate(new NetFileLoader(new BuiltinModels()).load(file), "typ");
-            SimulationOutcome reference = runNgspice(ngspice, e, dir);
+            Circuit circuit = withClampCapacitance(e.circuit(), cjo);
+            Statistics.label("clamp CJO").collect(clamps && cjo > 0 ? "> 0" : "none");
+            Statistics.label("driver").collect(ibis ? "IBIS tables" : "ramp");
+            SimulationOutcome reference = runNgspice(ngspice, circuit, dir);
             if (!(reference instanceof SimulationOutcome.Success ok)) {
                 Statistics.label("ngspice").collect("failed, try skipped");
                 return;
             }
             Statistics.label("ngspice").collect("ran");
-            SimulationOutcome mine = new BuiltinEngine().solve(e.circuit(), Duration.ofSeconds(60));
+            SimulationOutcome mine = new BuiltinEngine().solve(circuit, Duration.ofSeconds(60));
             if (!(mine instanceof SimulationOutcome.Success builtin)) {
                 throw new AssertionError("built-in engine failed: " + mine + "\n" + yaml);
             }
-            compare(e, ok.waveforms(), builtin.waveforms(), yaml);
+            compare(e, ok.waveforms(), builtin.waveforms(), yaml, true);
         } finally {
             delete(dir);
         }
     }
 
-    private static SimulationOutcome runNgspice(Path ngspice, Elaboration e, Path dir) {
-        String deck = new DeckWriter().render(e.circuit(), DeckOptions.of("x.raw"));
-        SimulationJob job = new SimulationJob(deck, dir, "x.cir", "x.raw", e.circuit().analysis().stop(),
-                Duration.ofSeconds(15), e.circuit().probes());
+    /** The circuit with every diode's CJO set to {@code cjo} (the CMOS model's clamps have none of their own). */
+    private static Circuit withClampCapacitance(Circuit c, double cjo) {
+        if (cjo == 0) {
+            return c;
+        }
+        List<Primitive> out = new ArrayList<>();
+        for (Primitive p : c.primitives()) {
+            if (p instanceof Primitive.Diode d) {
+                DiodeModel m = d.model();
+                out.add(new Primitive.Diode(d.name(), d.anode(), d.cathode(),
+                        new DiodeModel(m.name() + "c", m.is(), m.n(), m.rs(), cjo)));
+            } else {
+                out.add(p);
+            }
+        }
+        return new Circuit(c.title(), out, c.analysis(), c.probes(), c.notes());
+    }
+
+    private static SimulationOutcome runNgspice(Path ngspice, Circuit c, Path dir) {
+        String deck = new DeckWriter().render(c, DeckOptions.of("x.raw"));
+        SimulationJob job = new SimulationJob(deck, dir, "x.cir", "x.raw", c.analysis().stop(),
+                Duration.ofSeconds(15), c.probes());
         return NgspiceEngine.at(ngspice).run(job);
     }
 
-    private static void compare(Elaboration e, Waveforms ref, Waveforms mine, String yaml) {
+    /**
+     * Compares every receiver edge of two solutions with the tolerances above and throws an
+     * AssertionError listing each difference beyond them.
+     *
+     * @param statistics whether to collect jqwik statistics (only inside a property)
+     */
+    static void compare(Elaboration e, Waveforms ref, Waveforms mine, String yaml, boolean statistics) {
         double swing = e.swing();
         List<String> problems = new ArrayList<>();
         for (ReceiverProbe p : e.receivers()) {
@@ -134,19 +184,19 @@ class NgspiceCrossValidationTests {
                 double h = HYSTERESIS * swing;
                 boolean ambiguous = nearBandEdge(tr, vr, w, th, h, 0.01 * swing) || nearBandEdge(tm, vm, w, th, h, 0.01 * swing);
                 if (ambiguous) {
-                    Statistics.label("crossings").collect("extremum near the band, not compared");
+                    note(statistics, "crossings", "extremum near the band, not compared");
                     continue;
                 }
-                Statistics.label("crossings").collect("compared");
+                note(statistics, "crossings", "compared");
                 if (a.crossings() != b.crossings()) {
                     problems.add(where + " crossings: ngspice " + a.crossings() + ", builtin " + b.crossings());
                 }
                 if (Double.isFinite(a.firstCrossingS()) || Double.isFinite(b.firstCrossingS())) {
                     double tol = 10e-12 + 0.01 * Math.abs(a.firstCrossingS() - edge.source50());
                     if (plateau(tr, vr, w, th, 0.01 * swing, PLATEAU_FACTOR * tol)) {
-                        Statistics.label("first crossing").collect("on a plateau, not compared");
+                        note(statistics, "first crossing", "on a plateau, not compared");
                     } else {
-                        Statistics.label("first crossing").collect("compared");
+                        note(statistics, "first crossing", "compared");
                         check(problems, where + " first crossing", a.firstCrossingS(), b.firstCrossingS(), tol);
                     }
                 }
@@ -154,6 +204,12 @@ class NgspiceCrossValidationTests {
         }
         if (!problems.isEmpty()) {
             throw new AssertionError(String.join("\n", problems) + "\n--- net ---\n" + yaml);
+        }
+    }
+
+    private static void note(boolean statistics, String label, String value) {
+        if (statistics) {
+            Statistics.label(label).collect(value);
         }
     }
 

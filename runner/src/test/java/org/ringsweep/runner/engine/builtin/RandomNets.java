@@ -5,7 +5,7 @@ import java.util.Random;
 
 /**
  * Random board nets in the net file format (formats.md), built the way boards are: a ramp
- * driver, line segments with board-range impedances and delays, CMOS receivers with optional
+ * driver (or the demo board's IBIS io33 buffer, examples/demo-board/parts/kx32.ibs), line segments with board-range impedances and delays, CMOS receivers with optional
  * clamps, and one of the usual terminations. Values come from a seed so a failing case can be
  * rebuilt.
  */
@@ -15,6 +15,10 @@ final class RandomNets {
 
     /** The termination at the (first) far-end receiver, or at the driver for SERIES. */
     enum Termination { NONE, SERIES, PARALLEL_GND, PARALLEL_VTT, THEVENIN, RC }
+
+    /** The demo board's IBIS file (the tests run in the runner folder). */
+    private static final String IBIS_FILE = java.nio.file.Path.of("..", "examples", "demo-board", "parts", "kx32.ibs")
+            .toAbsolutePath().normalize().toString();
 
     private RandomNets() {
     }
@@ -26,18 +30,26 @@ final class RandomNets {
      * @param termination the termination
      * @param clamps      whether receivers have clamp diodes to their rails
      * @param lossy       whether one segment has series (and shunt) loss
+     * @param ibis        whether the driver is the IBIS io33 buffer (3.3 V) instead of a ramp
      * @param seed        drives every value
      */
-    static String yaml(Topology topology, Termination termination, boolean clamps, boolean lossy, long seed) {
+    static String yaml(Topology topology, Termination termination, boolean clamps, boolean lossy, boolean ibis, long seed) {
         Random r = new Random(seed);
         double vdd = new double[] {1.8, 2.5, 3.3}[r.nextInt(3)];
         double rise = pick(r, 0.3, 2.0);
         double rOut = pick(r, 5, 45);
+        if (ibis) {
+            vdd = 3.3; // the io33 buffer's typical supply ([Voltage Range] of kx32.ibs)
+        }
         StringBuilder y = new StringBuilder();
         y.append("format: ringsweep/net-1\nnet: RANDOM_").append(Long.toHexString(seed)).append('\n');
         y.append("rails: { VDD: ").append(num(vdd)).append(", VTT: ").append(num(vdd / 2)).append(" }\n");
-        y.append("drivers:\n  - { pin: U1.1, model: ramp, v_high: VDD, rise: ").append(num(rise)).append("ns, r_out: ")
-                .append(num(rOut)).append(" }\n");
+        if (ibis) {
+            y.append("drivers:\n  - { pin: U1.1, model: ibis, file: \"").append(IBIS_FILE).append("\", ibis_model: io33 }\n");
+        } else {
+            y.append("drivers:\n  - { pin: U1.1, model: ramp, v_high: VDD, rise: ").append(num(rise)).append("ns, r_out: ")
+                    .append(num(rOut)).append(" }\n");
+        }
         String[] rx = topology == Topology.POINT_TO_POINT ? new String[] {"U2.1"} : new String[] {"U2.1", "U3.1"};
         y.append("receivers:\n");
         for (String p : rx) {
