@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
+import java.lang.management.ManagementFactory;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -11,6 +12,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.stream.Stream;
 import org.ringsweep.runner.cli.Main;
 
@@ -24,10 +26,14 @@ import org.ringsweep.runner.cli.Main;
  * JVM. The first {@code check} is reported on its own (a cold JVM, as a command line run is);
  * then {@value #ROUNDS} rounds each time both, alternating which goes first so drift of the
  * machine's load hits both alike, and the best and the median of each side are compared.
+ * Last, {@code check} runs in fresh JVMs as a command line would (with the launcher's class-data
+ * archive as well, when this JVM was started with one), against the median bare time.
  */
 public final class OverheadBenchmark {
     /** Measured rounds after the cold one. */
     static final int ROUNDS = 5;
+    /** Fresh-JVM runs of each kind (they are slow: a JVM start each). */
+    static final int COMMAND_LINE_ROUNDS = 3;
 
     private OverheadBenchmark() {
     }
@@ -82,6 +88,22 @@ public final class OverheadBenchmark {
             long t3 = System.nanoTime();
             quietCheck(checkArgs(workDir.resolve("out-reports"), netFiles, false));
             double reportSeconds = (System.nanoTime() - t3) / 1e9;
+            // As a user runs it: a fresh JVM per check, with and without the launcher's class-data archive.
+            Optional<String> archive = ManagementFactory.getRuntimeMXBean().getInputArguments().stream()
+                    .filter(a -> a.startsWith("-XX:SharedArchiveFile=")).findFirst();
+            double[] fresh = new double[COMMAND_LINE_ROUNDS];
+            double[] freshArchived = new double[COMMAND_LINE_ROUNDS];
+            for (int round = 0; round < COMMAND_LINE_ROUNDS; round++) {
+                fresh[round] = freshJvmCheck(Optional.empty(), checkArgs(workDir.resolve("out-jvm-" + round), netFiles, true));
+                if (archive.isPresent()) {
+                    freshArchived[round] = freshJvmCheck(archive, checkArgs(workDir.resolve("out-cds-" + round), netFiles, true));
+                }
+            }
+            String commandLine = String.format(Locale.ROOT, "; check in a fresh JVM (as on the command line), median of %d: %.2f s, ratio %.3f",
+                    COMMAND_LINE_ROUNDS, median(fresh), median(fresh) / median(bare))
+                    + (archive.isEmpty() ? " (no class-data archive: run through ./ringsweep to measure it)"
+                            : String.format(Locale.ROOT, "; with the launcher's class-data archive %.2f s, ratio %.3f",
+                                    median(freshArchived), median(freshArchived) / median(bare)));
             int decks = deckFiles.size();
             double bestCheck = Arrays.stream(check).min().orElseThrow();
             double bestBare = Arrays.stream(bare).min().orElseThrow();
@@ -95,7 +117,8 @@ public final class OverheadBenchmark {
                             + " check writing report.html and junit.xml too %.2f s, ratio %.3f",
                     nets, decks, ROUNDS, bestCheck, medianCheck, code, bestBare, medianBare, bestCheck / bestBare,
                     medianCheck / medianBare, 1e3 * medianBare / decks, 1e3 * (medianCheck - medianBare) / decks,
-                    1e3 * deckOnly / decks, coldCheck, coldCheck / medianBare, reportSeconds, reportSeconds / medianBare);
+                    1e3 * deckOnly / decks, coldCheck, coldCheck / medianBare, reportSeconds, reportSeconds / medianBare)
+                    + commandLine;
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         } catch (InterruptedException e) {
@@ -124,6 +147,25 @@ public final class OverheadBenchmark {
                     .start();
             p.waitFor();
         }
+        return (System.nanoTime() - t) / 1e9;
+    }
+
+    /**
+     * Seconds for one {@code check} in a child JVM on this JVM's class path, output discarded: the
+     * start-up, class loading and JIT warm-up a command-line run pays.
+     */
+    private static double freshJvmCheck(Optional<String> archiveOption, List<String> args) throws IOException, InterruptedException {
+        List<String> command = new ArrayList<>();
+        command.add(ProcessHandle.current().info().command().orElse("java"));
+        archiveOption.ifPresent(command::add);
+        command.addAll(List.of("-cp", System.getProperty("java.class.path"), Main.class.getName()));
+        command.addAll(args);
+        long t = System.nanoTime();
+        Process p = new ProcessBuilder(command)
+                .redirectOutput(ProcessBuilder.Redirect.DISCARD)
+                .redirectError(ProcessBuilder.Redirect.DISCARD)
+                .start();
+        p.waitFor();
         return (System.nanoTime() - t) / 1e9;
     }
 
