@@ -25,7 +25,6 @@ import org.ringsweep.runner.input.InputException;
 import org.ringsweep.runner.input.NetFileLoader;
 import org.ringsweep.runner.input.PointParser;
 import org.ringsweep.runner.plugins.PluginFailureException;
-import org.ringsweep.runner.plugins.PluginLoadException;
 import org.ringsweep.runner.plugins.PluginRegistry;
 import org.ringsweep.runner.results.ResultJson;
 import org.ringsweep.runner.results.ResultRecord;
@@ -59,13 +58,11 @@ final class CheckFlow {
     }
 
     Outcome execute(List<Path> files, boolean corners, List<String> sets, boolean simulate) {
-        PluginRegistry registry;
-        try {
-            registry = Plugins.load(common.plugins, common.quiet, err);
-        } catch (PluginLoadException e) {
-            err.println("ringsweep: " + e.getMessage());
+        Optional<PluginRegistry> plugins = Plugins.loadOrReport(common.plugins, common.quiet, err);
+        if (plugins.isEmpty()) {
             return new Outcome(ExitCodes.INPUT, List.of());
         }
+        PluginRegistry registry = plugins.get();
         ModelCatalog catalog = registry.catalog();
         NetFileLoader loader = new NetFileLoader(catalog);
         PointParser points = new PointParser(catalog);

@@ -3,11 +3,11 @@ package org.ringsweep.runner.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.ringsweep.api.model.ModelDescriptor;
 import org.ringsweep.api.model.ParameterSpec;
 import org.ringsweep.runner.plugins.PluginCheck;
-import org.ringsweep.runner.plugins.PluginLoadException;
 import org.ringsweep.runner.plugins.PluginRegistry;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -35,13 +35,11 @@ public final class ModelsCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        PluginRegistry registry;
-        try {
-            registry = Plugins.load(plugins, quiet, err);
-        } catch (PluginLoadException e) {
-            err.println("ringsweep: " + e.getMessage());
+        Optional<PluginRegistry> loaded = Plugins.loadOrReport(plugins, quiet, err);
+        if (loaded.isEmpty()) {
             return ExitCodes.INPUT;
         }
+        PluginRegistry registry = loaded.get();
         for (ModelDescriptor m : registry.catalog().all()) {
             out.printf("%s %s (%s): %s%n", m.role().name().toLowerCase(Locale.ROOT), m.id(), m.origin(), m.description());
             for (ParameterSpec p : m.parameters()) {

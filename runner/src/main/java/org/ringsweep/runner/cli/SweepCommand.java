@@ -32,7 +32,6 @@ import org.ringsweep.runner.input.InputException;
 import org.ringsweep.runner.input.NetFileLoader;
 import org.ringsweep.runner.input.PointParser;
 import org.ringsweep.runner.plugins.PluginFailureException;
-import org.ringsweep.runner.plugins.PluginLoadException;
 import org.ringsweep.runner.plugins.PluginRegistry;
 import org.ringsweep.runner.results.Verdict;
 import org.ringsweep.runner.store.FinishedPoints;
@@ -119,13 +118,11 @@ public final class SweepCommand implements Callable<Integer> {
     public Integer call() throws InterruptedException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        PluginRegistry registry;
-        try {
-            registry = Plugins.load(common.plugins, common.quiet, err);
-        } catch (PluginLoadException e) {
-            err.println("ringsweep: " + e.getMessage());
+        Optional<PluginRegistry> loaded = Plugins.loadOrReport(common.plugins, common.quiet, err);
+        if (loaded.isEmpty()) {
             return ExitCodes.INPUT;
         }
+        PluginRegistry registry = loaded.get();
         ModelCatalog catalog = registry.catalog();
         PointParser parser = new PointParser(catalog);
         Elaborator elaborator = registry.elaborator();

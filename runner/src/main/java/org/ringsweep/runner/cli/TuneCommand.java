@@ -24,7 +24,6 @@ import org.ringsweep.runner.engine.SimulationEngine;
 import org.ringsweep.runner.input.InputException;
 import org.ringsweep.runner.input.NetFileLoader;
 import org.ringsweep.runner.input.PointParser;
-import org.ringsweep.runner.plugins.PluginLoadException;
 import org.ringsweep.runner.plugins.PluginRegistry;
 import org.ringsweep.runner.results.Verdict;
 import org.ringsweep.runner.sweep.ESeries;
@@ -74,13 +73,11 @@ public final class TuneCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        PluginRegistry registry;
-        try {
-            registry = Plugins.load(common.plugins, common.quiet, err);
-        } catch (PluginLoadException e) {
-            err.println("ringsweep: " + e.getMessage());
+        Optional<PluginRegistry> loaded = Plugins.loadOrReport(common.plugins, common.quiet, err);
+        if (loaded.isEmpty()) {
             return ExitCodes.INPUT;
         }
+        PluginRegistry registry = loaded.get();
         ModelCatalog catalog = registry.catalog();
         Optional<ESeries.Series> s = ESeries.Series.named(series);
         if (s.isEmpty()) {
