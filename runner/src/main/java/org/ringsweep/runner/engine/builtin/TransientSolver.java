@@ -52,8 +52,12 @@ import org.ringsweep.runner.engine.FailureKind;
  * <li>Diode junction capacitance (CJO &gt; 0): the SPICE depletion charge
  *     ({@link Junction#charge}), integrated with the step's rule from the charge
  *     ({@code i = (q − qₙ)/h}, or {@code 2(q − qₙ)/h − iₙ}), linearised with {@code Cj(v)·(1 or 2)/h}.</li>
+ * <li>A table's conductance changes at every step of an edge (its scale moves); the factored
+ *     matrix keeps the one it was factored with and each solve adds the difference exactly as a
+ *     low-rank update (Sherman–Morrison–Woodbury, see {@code solveWithTables}), so tables never
+ *     make the solver re-factor.</li>
  * <li>Diodes: Newton–Raphson with SPICE's {@code pnjlim} limiting. The factored matrix is reused
- *     while each diode's (and table's) conductance stays within {@value #CHORD_RELATIVE} (relative) plus
+ *     while each diode's conductance stays within {@value #CHORD_RELATIVE} (relative) plus
  *     {@value #CHORD_ABSOLUTE} S of the factored one (a chord iteration; its right-hand side
  *     uses the true junction current, so its fixed point is the exact solution). A point is
  *     accepted when no voltage was limited, the solution moved within {@code reltol}/{@code vntol}
@@ -200,11 +204,28 @@ final class TransientSolver {
     private final long[] luGeneration = new long[FACTOR_CACHE];
     private final long[] luUsed = new long[FACTOR_CACHE];
     private DenseLu lu;
+    /** The cache entry {@link #lu} is. */
+    private int luIndex;
+    /**
+     * Per cache entry: the table conductances stamped into its factorisation, and (once needed)
+     * {@code Z = A⁻¹·U}, column j = the solution for table j's unit current pair (n values per
+     * table), for the low-rank update of {@link #solveWithTables}.
+     */
+    private final double[][] luTabG = new double[FACTOR_CACHE][];
+    private final double[][] luZ = new double[FACTOR_CACHE][];
+    private final boolean[] luZReady = new boolean[FACTOR_CACHE];
+    /** Scratch of the low-rank update: the small k × k system and its right-hand side. */
+    private final double[] woodM;
+    private final double[] woodR;
+    private final double[] tabDelta;
+    private final int[] tabActive;
     private long generation;
     private long uses;
     private final double[] factoredTrG;
     /** The spare right-hand side / solution vector (swapped with {@link #x}). */
     private double[] spare;
+    private final double[] spareColumn;
+    private final double[] savedRhs;
     private int factorCount;
 
     TransientSolver(Circuit circuit, Netlist net, long deadlineNanos) {
@@ -288,9 +309,19 @@ final class TransientSolver {
             trTable[k] = new PwlTable(tresEl[k].times(), tresEl[k].ohms());
         }
         factoredTrG = new double[tres.length];
+        for (int i = 0; i < FACTOR_CACHE; i++) {
+            luTabG[i] = new double[tab.length];
+            luZ[i] = new double[tab.length * size];
+        }
+        woodM = new double[tab.length * tab.length];
+        woodR = new double[tab.length];
+        tabDelta = new double[tab.length];
+        tabActive = new int[tab.length];
         matrix = new double[size * size];
         Arrays.fill(luGeneration, -1);
         spare = new double[size];
+        spareColumn = new double[size];
+        savedRhs = new double[size];
     }
 
     /** The time step the solve uses (s). */
@@ -645,7 +676,7 @@ final class TransientSolver {
             stampSources(b, t, scale);
             stampHistory(b, rule, h);
             stampNonlinearCurrents(b);
-            lu.solve(b);
+            solveWithTables(b, t);
             solves++;
             boolean converged = !limited && (iter > 0 ? close(b, x, size) : true) && linearisationHolds(b);
             double[] previous = x;
@@ -670,6 +701,7 @@ final class TransientSolver {
             if (luGeneration[i] == generation && luRule[i] == rule && luH[i] == h) {
                 luUsed[i] = ++uses;
                 lu = lus[i];
+                luIndex = i;
                 return;
             }
             if (luUsed[i] < luUsed[oldest]) {
@@ -692,6 +724,117 @@ final class TransientSolver {
         luH[oldest] = h;
         luUsed[oldest] = ++uses;
         lu = lus[oldest];
+        luIndex = oldest;
+        System.arraycopy(tabG, 0, luTabG[oldest], 0, tab.length);
+        luZReady[oldest] = false;
+    }
+
+    /**
+     * Solves the transient system with the tables' present conductances, from a factorisation
+     * that holds other ones: an IBIS table's conductance {@code s(t)·dy/dv} changes at every step
+     * of an edge, and re-factoring for each would dominate the solve. The change is a low-rank
+     * update (one VCCS per table: {@code ΔA = Σ Δgⱼ·uⱼ·vⱼᵀ}, {@code uⱼ = e₊ − e₋} the current's
+     * nodes, {@code vⱼ = e_cp − e_cm} the controlling ones), so the Sherman–Morrison–Woodbury
+     * identity gives the exact solution of the updated system,
+     * {@code x = y − Z·(I + D·Vᵀ·Z)⁻¹·D·Vᵀ·y} with {@code y = A⁻¹b}, {@code Z = A⁻¹U},
+     * {@code D = diag(Δg)}: one solve plus a k × k system (k tables) instead of a factorisation.
+     * Newton's iterates are the same as with a fresh factorisation, up to rounding. When the
+     * small system has no usable pivot the matrix is factored with the present conductances.
+     */
+    private void solveWithTables(double[] b, double t) {
+        double[] base = luTabG[luIndex];
+        int k = 0; // only the tables whose conductance differs from the factored one take part
+        for (int j = 0; j < tab.length; j++) {
+            double delta = tabG[j] - base[j];
+            if (delta != 0) {
+                tabDelta[k] = delta;
+                tabActive[k++] = j;
+            }
+        }
+        if (k == 0) {
+            lu.solve(b);
+            return;
+        }
+        System.arraycopy(b, 0, savedRhs, 0, size);
+        lu.solve(b);
+        double[] z = luZ[luIndex];
+        if (!luZReady[luIndex]) {
+            for (int j = 0; j < tab.length; j++) {
+                Arrays.fill(spareColumn, 0);
+                inject(spareColumn, tab[j][0], tab[j][1], 1); // u = e₊ − e₋: the stamp's rows
+                lu.solve(spareColumn);
+                System.arraycopy(spareColumn, 0, z, j * size, size);
+            }
+            luZReady[luIndex] = true;
+        }
+        for (int i = 0; i < k; i++) {
+            int cp = tab[tabActive[i]][2];
+            int cm = tab[tabActive[i]][3];
+            woodR[i] = tabDelta[i] * (v(b, cp) - v(b, cm));
+            for (int j = 0; j < k; j++) {
+                int o = tabActive[j] * size;
+                woodM[i * k + j] = (i == j ? 1 : 0) + tabDelta[i] * ((cp < 0 ? 0 : z[o + cp]) - (cm < 0 ? 0 : z[o + cm]));
+            }
+        }
+        if (!solveSmall(woodM, woodR, k)) {
+            // Rare: re-factor with the present conductances and solve afresh.
+            generation++;
+            factorFor(rule, h, t);
+            System.arraycopy(savedRhs, 0, b, 0, size);
+            lu.solve(b);
+            return;
+        }
+        for (int j = 0; j < k; j++) {
+            double w = woodR[j];
+            if (w != 0) {
+                int o = tabActive[j] * size;
+                for (int i = 0; i < size; i++) {
+                    b[i] -= z[o + i] * w;
+                }
+            }
+        }
+    }
+
+    /** Gaussian elimination with partial pivoting of a small k × k system in place; r receives the solution. */
+    private static boolean solveSmall(double[] m, double[] r, int k) {
+        for (int c = 0; c < k; c++) {
+            int p = c;
+            for (int i = c + 1; i < k; i++) {
+                if (Math.abs(m[i * k + c]) > Math.abs(m[p * k + c])) {
+                    p = i;
+                }
+            }
+            if (!(Math.abs(m[p * k + c]) > 1e-12)) {
+                return false;
+            }
+            if (p != c) {
+                for (int j = 0; j < k; j++) {
+                    double tmp = m[p * k + j];
+                    m[p * k + j] = m[c * k + j];
+                    m[c * k + j] = tmp;
+                }
+                double tmp = r[p];
+                r[p] = r[c];
+                r[c] = tmp;
+            }
+            for (int i = c + 1; i < k; i++) {
+                double f = m[i * k + c] / m[c * k + c];
+                if (f != 0) {
+                    for (int j = c; j < k; j++) {
+                        m[i * k + j] -= f * m[c * k + j];
+                    }
+                    r[i] -= f * r[c];
+                }
+            }
+        }
+        for (int c = k - 1; c >= 0; c--) {
+            double s = r[c];
+            for (int j = c + 1; j < k; j++) {
+                s -= m[c * k + j] * r[j];
+            }
+            r[c] = s / m[c * k + c];
+        }
+        return true;
     }
 
     /**
@@ -750,10 +893,10 @@ final class TransientSolver {
             tabIter[k] = vc;
             tabIterSeg[k] = seg;
             double g = tabS[k] * tabY[k].slope(seg);
-            if (!keepFactored || Math.abs(g - tabG[k]) > CHORD_ABSOLUTE + CHORD_RELATIVE * Math.abs(tabG[k])) {
-                tabG[k] = g;
+            if (!keepFactored && g != tabG[k]) {
                 nonlinearChanged = true;
             }
+            tabG[k] = g; // in a transient step the low-rank update of solveWithTables takes it exactly
             tabIeq[k] = tabS[k] * tabY[k].value(vc, seg) - tabG[k] * vc;
         }
         return limited;
