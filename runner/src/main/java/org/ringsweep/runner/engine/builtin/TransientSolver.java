@@ -106,6 +106,17 @@ final class TransientSolver {
      * pass on: 1 % of the swing on a 241 mm lossy line, which no truncation-error estimate sees.)
      */
     static final double LINE_STEP = 0.5;
+    /**
+     * The step the truncation-error control may grow to on a net of lossless lines only, as a
+     * fraction of the shortest delay: under one delay every delayed value still lies in the
+     * accepted past, also after a step is stretched by up to 1 % onto a breakpoint.
+     */
+    static final double LOSSLESS_CEILING = 0.99;
+    /**
+     * Solves in a row after which a table conductance that differs from the factored one is
+     * factored in (see {@code solveWithTables}) instead of updated at every solve.
+     */
+    static final int REBASE_AFTER = 16;
     /** Factorisations kept for reuse (rules × step sizes). */
     static final int FACTOR_CACHE = 6;
     /**
@@ -114,6 +125,10 @@ final class TransientSolver {
      * (never beyond the largest step) when the estimate falls under a tenth of it.
      */
     static final double LTE_RELATIVE = 2e-4;
+    /** Fewest steps across the shortest interval between two sharp source corners when the step grows. */
+    static final double EDGE_POINTS = 10;
+    /** The step control doubles the base step at most this many times (when the step is the engine's own choice). */
+    static final int MAX_DOUBLINGS = 3;
     /** The smallest step is the largest one over 2^this. */
     static final int MAX_HALVINGS = 5;
     /** How many steps between two looks at the wall clock. */
@@ -219,6 +234,9 @@ final class TransientSolver {
     private final double[] woodR;
     private final double[] tabDelta;
     private final int[] tabActive;
+    /** Per table: how many solves in a row its conductance has not changed, and its value at the last solve. */
+    private final int[] tabSame;
+    private final double[] tabLastG;
     private long generation;
     private long uses;
     private final double[] factoredTrG;
@@ -317,6 +335,8 @@ final class TransientSolver {
         woodR = new double[tab.length];
         tabDelta = new double[tab.length];
         tabActive = new int[tab.length];
+        tabSame = new int[tab.length];
+        tabLastG = new double[tab.length];
         matrix = new double[size * size];
         Arrays.fill(luGeneration, -1);
         spare = new double[size];
@@ -327,6 +347,42 @@ final class TransientSolver {
     /** The time step the solve uses (s). */
     double step() {
         return Math.min(analysis.maxStep(), LINE_STEP * net.shortestDelay());
+    }
+
+    /**
+     * The largest step the truncation-error control may grow to (s). The base step when the
+     * analysis's step was set explicitly (a user's step is honoured). Otherwise the base step is
+     * the elaborator's resolution rule for ngspice (a fraction of the shortest ramp and of every
+     * long line's delay), which this engine's own error control need not keep in the flat
+     * stretches between edges: the step may double up to {@value #MAX_DOUBLINGS} times, but stays
+     * under the line bound of the method of characteristics ({@value #LOSSLESS_CEILING} of the
+     * shortest delay, {@value #LINE_STEP} of it with lossy-line sections) and under
+     * 1/{@value #EDGE_POINTS} of the shortest interval between two sharp source corners (a
+     * ramp), so an edge keeps a resolution of its own whatever the error estimate says.
+     *
+     * @param base   the base step (s)
+     * @param breaks the breakpoints, with {@link #sharp} filled
+     */
+    private double stepCeiling(double base, double[] breaks) {
+        if (!analysis.stepAuto()) {
+            return base;
+        }
+        double lineBound = (net.hasLossyLine() ? LINE_STEP : LOSSLESS_CEILING) * net.shortestDelay();
+        double edge = Double.POSITIVE_INFINITY;
+        double lastSharp = Double.NaN;
+        for (int i = 0; i < breaks.length; i++) {
+            if (sharp[i]) {
+                if (!Double.isNaN(lastSharp)) {
+                    edge = Math.min(edge, breaks[i] - lastSharp);
+                }
+                lastSharp = breaks[i];
+            }
+        }
+        double ceiling = Math.min(lineBound, base * (1L << MAX_DOUBLINGS));
+        if (edge < Double.POSITIVE_INFINITY) {
+            ceiling = Math.min(ceiling, edge / EDGE_POINTS);
+        }
+        return Math.max(base, ceiling);
     }
 
     /** How many times the transient matrix was factored (for the benchmark's notes). */
@@ -383,13 +439,20 @@ final class TransientSolver {
         double t1 = 0;
         double t2 = 0;
         int smooth = 1; // accepted points since the last sharp corner, that one included
+        // The step is h·2^−level: positive levels halve it for the truncation error, negative ones
+        // (only when the step is the engine's own choice) double it up to the ceiling.
+        double ceiling = stepCeiling(h, breaks);
+        int lowest = 0;
+        while (lowest > -MAX_DOUBLINGS && h * (1L << -lowest) < ceiling) {
+            lowest--;
+        }
         int halvings = 0;
         while (t < stop - tiny) {
             while (breaks[next] <= t + tiny) {
                 next++;
             }
             double bp = breaks[next];
-            double hTry = h / (1 << halvings);
+            double hTry = halvings >= 0 ? h / (1 << halvings) : Math.min(ceiling, h * (1L << -halvings));
             double tn = t + hTry;
             boolean corner = false;
             if (tn >= bp - 0.01 * hTry) {
@@ -424,8 +487,11 @@ final class TransientSolver {
                 rejected++;
                 continue;
             }
-            if (ratio < 0.1 && halvings > 0 && !corner) {
+            if (ratio < 0.1 && halvings > lowest && !corner && (halvings > 0 || smooth >= 3)) {
                 halvings--; // the error grows as h³: a doubled step stays under the tolerance
+            }
+            if (corner) {
+                halvings = Math.max(halvings, 0); // the damped steps after a sharp corner: not beyond the base step
             }
             accept(rule, dt, tn);
             double[] spareBack = back2;
@@ -708,25 +774,30 @@ final class TransientSolver {
                 oldest = i;
             }
         }
-        if (lus[oldest] == null) {
-            lus[oldest] = new DenseLu(size);
+        factorInto(oldest, rule, h, t);
+    }
+
+    /** Factors the transient matrix with the present conductances into cache entry {@code slot} and makes it {@link #lu}. */
+    private void factorInto(int slot, Rule rule, double h, double t) {
+        if (lus[slot] == null) {
+            lus[slot] = new DenseLu(size);
         }
         Arrays.fill(matrix, 0);
         stampLinear(matrix, size, rule, h);
         stampNonlinear(matrix, size);
-        int bad = lus[oldest].factor(matrix);
+        int bad = lus[slot].factor(matrix);
         if (bad >= 0) {
             throw singular(bad, "at t = `" + t + "` s");
         }
         factorCount++;
-        luGeneration[oldest] = generation;
-        luRule[oldest] = rule;
-        luH[oldest] = h;
-        luUsed[oldest] = ++uses;
-        lu = lus[oldest];
-        luIndex = oldest;
-        System.arraycopy(tabG, 0, luTabG[oldest], 0, tab.length);
-        luZReady[oldest] = false;
+        luGeneration[slot] = generation;
+        luRule[slot] = rule;
+        luH[slot] = h;
+        luUsed[slot] = ++uses;
+        lu = lus[slot];
+        luIndex = slot;
+        System.arraycopy(tabG, 0, luTabG[slot], 0, tab.length);
+        luZReady[slot] = false;
     }
 
     /**
@@ -744,12 +815,22 @@ final class TransientSolver {
     private void solveWithTables(double[] b, double t) {
         double[] base = luTabG[luIndex];
         int k = 0; // only the tables whose conductance differs from the factored one take part
+        boolean settled = false;
         for (int j = 0; j < tab.length; j++) {
+            tabSame[j] = tabG[j] == tabLastG[j] ? tabSame[j] + 1 : 0;
+            tabLastG[j] = tabG[j];
             double delta = tabG[j] - base[j];
             if (delta != 0) {
                 tabDelta[k] = delta;
                 tabActive[k++] = j;
+                settled |= tabSame[j] >= REBASE_AFTER;
             }
+        }
+        if (settled) {
+            // A table has kept a conductance other than the factored one for a while (a clamp
+            // on a new segment, a driver after its edge): factor it in rather than update every solve.
+            factorInto(luIndex, rule, h, t);
+            k = 0;
         }
         if (k == 0) {
             lu.solve(b);
