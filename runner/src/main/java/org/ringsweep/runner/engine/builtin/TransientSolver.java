@@ -125,8 +125,13 @@ final class TransientSolver {
      * (never beyond the largest step) when the estimate falls under a tenth of it.
      */
     static final double LTE_RELATIVE = 2e-4;
-    /** Fewest steps across the shortest interval between two sharp source corners when the step grows. */
+    /** Fewest steps across the shortest transition of a source (a ramp) when the step grows. */
     static final double EDGE_POINTS = 10;
+    /**
+     * Steps accepted after a rejection before the step may grow beyond the base step again: a
+     * step that has just met an edge would otherwise double into it and be redone.
+     */
+    static final int CALM_STEPS = 2;
     /** The step control doubles the base step at most this many times (when the step is the engine's own choice). */
     static final int MAX_DOUBLINGS = 3;
     /** The smallest step is the largest one over 2^this. */
@@ -228,7 +233,7 @@ final class TransientSolver {
      */
     private final double[][] luTabG = new double[FACTOR_CACHE][];
     private final double[][] luZ = new double[FACTOR_CACHE][];
-    private final boolean[] luZReady = new boolean[FACTOR_CACHE];
+    private final boolean[][] luZReady = new boolean[FACTOR_CACHE][];
     /** Scratch of the low-rank update: the small k × k system and its right-hand side. */
     private final double[] woodM;
     private final double[] woodR;
@@ -330,6 +335,7 @@ final class TransientSolver {
         for (int i = 0; i < FACTOR_CACHE; i++) {
             luTabG[i] = new double[tab.length];
             luZ[i] = new double[tab.length * size];
+            luZReady[i] = new boolean[tab.length];
         }
         woodM = new double[tab.length * tab.length];
         woodR = new double[tab.length];
@@ -357,32 +363,49 @@ final class TransientSolver {
      * stretches between edges: the step may double up to {@value #MAX_DOUBLINGS} times, but stays
      * under the line bound of the method of characteristics ({@value #LOSSLESS_CEILING} of the
      * shortest delay, {@value #LINE_STEP} of it with lossy-line sections) and under
-     * 1/{@value #EDGE_POINTS} of the shortest interval between two sharp source corners (a
-     * ramp), so an edge keeps a resolution of its own whatever the error estimate says.
+     * 1/{@value #EDGE_POINTS} of the shortest transition of any source, timed resistor or table
+     * scale, so an edge keeps a resolution of its own whatever the error estimate says.
      *
-     * @param base   the base step (s)
-     * @param breaks the breakpoints, with {@link #sharp} filled
+     * @param base the base step (s)
      */
-    private double stepCeiling(double base, double[] breaks) {
+    private double stepCeiling(double base) {
         if (!analysis.stepAuto()) {
             return base;
         }
         double lineBound = (net.hasLossyLine() ? LINE_STEP : LOSSLESS_CEILING) * net.shortestDelay();
         double edge = Double.POSITIVE_INFINITY;
-        double lastSharp = Double.NaN;
-        for (int i = 0; i < breaks.length; i++) {
-            if (sharp[i]) {
-                if (!Double.isNaN(lastSharp)) {
-                    edge = Math.min(edge, breaks[i] - lastSharp);
-                }
-                lastSharp = breaks[i];
+        for (Primitive p : srcEl) {
+            if (p instanceof Primitive.PwlVoltage v) {
+                edge = Math.min(edge, shortestTransition(v.times(), v.volts()));
             }
         }
-        double ceiling = Math.min(lineBound, base * (1L << MAX_DOUBLINGS));
-        if (edge < Double.POSITIVE_INFINITY) {
-            ceiling = Math.min(ceiling, edge / EDGE_POINTS);
+        for (Primitive.TimedResistor r : tresEl) {
+            edge = Math.min(edge, shortestTransition(r.times(), r.ohms()));
         }
-        return Math.max(base, ceiling);
+        for (Primitive.TableCurrent tc : net.tables) {
+            edge = Math.min(edge, shortestTransition(tc.scaleTimes(), tc.scale()));
+        }
+        return Math.max(base, Math.min(Math.min(lineBound, base * (1L << MAX_DOUBLINGS)), edge / EDGE_POINTS));
+    }
+
+    /**
+     * The shortest transition of a function of time held outside its points (s): a run of
+     * consecutive points over which it keeps changing (a ramp, a sampled switching waveform),
+     * from the last point before the change to the first after it; +∞ when it never changes.
+     */
+    static double shortestTransition(double[] t, double[] v) {
+        double shortest = Double.POSITIVE_INFINITY;
+        int start = -1;
+        for (int i = 1; i <= t.length; i++) {
+            boolean changing = i < t.length && v[i] != v[i - 1];
+            if (changing && start < 0) {
+                start = i - 1;
+            } else if (!changing && start >= 0) {
+                shortest = Math.min(shortest, t[i - 1] - t[start]);
+                start = -1;
+            }
+        }
+        return shortest;
     }
 
     /** How many times the transient matrix was factored (for the benchmark's notes). */
@@ -431,7 +454,6 @@ final class TransientSolver {
         int damped = DAMPED_STEPS;
         int next = 0;
         double tiny = 1e-6 * h;
-        double[] delayed = new double[4];
         double lteTol = LTE_RELATIVE * referenceVoltage();
         double[] saved = new double[size];
         double[] back1 = new double[nodes];
@@ -441,12 +463,13 @@ final class TransientSolver {
         int smooth = 1; // accepted points since the last sharp corner, that one included
         // The step is h·2^−level: positive levels halve it for the truncation error, negative ones
         // (only when the step is the engine's own choice) double it up to the ceiling.
-        double ceiling = stepCeiling(h, breaks);
+        double ceiling = stepCeiling(h);
         int lowest = 0;
         while (lowest > -MAX_DOUBLINGS && h * (1L << -lowest) < ceiling) {
             lowest--;
         }
         int halvings = 0;
+        int calm = 0; // accepted steps since the last rejection
         while (t < stop - tiny) {
             while (breaks[next] <= t + tiny) {
                 next++;
@@ -461,33 +484,19 @@ final class TransientSolver {
             }
             double dt = tn - t;
             Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
-            for (int l = 0; l < line.length; l++) {
-                history[l].at(tn - lineTd[l], delayed);
-                lineIh[2 * l] = lineG[l] * delayed[2] + delayed[3];
-                lineIh[2 * l + 1] = lineG[l] * delayed[0] + delayed[1];
-            }
-            for (int k = 0; k < tres.length; k++) {
-                trSeg[k] = trTable[k].segmentOf(tn, trSeg[k]);
-                double g = 1 / trTable[k].value(tn, trSeg[k]);
-                if (Math.abs(g - trG[k]) > TIMED_CHORD * Math.abs(trG[k])) {
-                    trG[k] = g; // else the factored value stands: a slow creep need not re-factor every step
-                }
-            }
-            scales(tn);
             System.arraycopy(x, 0, saved, 0, size);
-            if (!newton(rule, dt, tn, 1.0)) {
-                throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
-                        + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
-            }
+            solvePoint(rule, dt, tn);
             double ratio = rule == Rule.TRAPEZOID && smooth >= 3 ? truncationError(saved, t, back1, t1, back2, t2, tn) / lteTol : 0;
             if (ratio > 1 && halvings < MAX_HALVINGS) {
                 // Redo the step at half the size: nothing of it was accepted (the state moves only in accept).
                 System.arraycopy(saved, 0, x, 0, size);
                 halvings++;
                 rejected++;
+                calm = 0;
                 continue;
             }
-            if (ratio < 0.1 && halvings > lowest && !corner && (halvings > 0 || smooth >= 3)) {
+            calm++;
+            if (ratio < 0.1 && halvings > lowest && !corner && (halvings > 0 || smooth >= 3 && calm > CALM_STEPS)) {
                 halvings--; // the error grows as h³: a doubled step stays under the tolerance
             }
             if (corner) {
@@ -530,6 +539,35 @@ final class TransientSolver {
         }
         return Waveforms.of(axis, signals, false);
     }
+
+    /**
+     * Solves the time point {@code tn}, a step {@code dt} after the last accepted one, into
+     * {@link #x}: the lines' history sources, the timed resistors and table scales at tn, then
+     * Newton. Apart from the time loop so the JIT compiles the per-step work after a few solves
+     * (it is called every step), not only once the loop's method has been entered hundreds of times.
+     */
+    private void solvePoint(Rule rule, double dt, double tn) {
+        for (int l = 0; l < line.length; l++) {
+            history[l].at(tn - lineTd[l], delayed);
+            lineIh[2 * l] = lineG[l] * delayed[2] + delayed[3];
+            lineIh[2 * l + 1] = lineG[l] * delayed[0] + delayed[1];
+        }
+        for (int k = 0; k < tres.length; k++) {
+            trSeg[k] = trTable[k].segmentOf(tn, trSeg[k]);
+            double g = 1 / trTable[k].value(tn, trSeg[k]);
+            if (Math.abs(g - trG[k]) > TIMED_CHORD * Math.abs(trG[k])) {
+                trG[k] = g; // else the factored value stands: a slow creep need not re-factor every step
+            }
+        }
+        scales(tn);
+        if (!newton(rule, dt, tn, 1.0)) {
+            throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
+                    + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
+        }
+    }
+
+    /** Scratch for a line's delayed values: v1, i1, v2, i2. */
+    private final double[] delayed = new double[4];
 
     private void record(double[][] out, int[] probeIndex, int at) {
         for (int i = 0; i < probeIndex.length; i++) {
@@ -797,7 +835,7 @@ final class TransientSolver {
         lu = lus[slot];
         luIndex = slot;
         System.arraycopy(tabG, 0, luTabG[slot], 0, tab.length);
-        luZReady[slot] = false;
+        Arrays.fill(luZReady[slot], false);
     }
 
     /**
@@ -839,14 +877,17 @@ final class TransientSolver {
         System.arraycopy(b, 0, savedRhs, 0, size);
         lu.solve(b);
         double[] z = luZ[luIndex];
-        if (!luZReady[luIndex]) {
-            for (int j = 0; j < tab.length; j++) {
+        boolean[] ready = luZReady[luIndex];
+        for (int i = 0; i < k; i++) {
+            int j = tabActive[i];
+            if (!ready[j]) {
+                // Z's column for table j, computed once per factorisation when the table first takes part.
                 Arrays.fill(spareColumn, 0);
                 inject(spareColumn, tab[j][0], tab[j][1], 1); // u = e₊ − e₋: the stamp's rows
                 lu.solve(spareColumn);
                 System.arraycopy(spareColumn, 0, z, j * size, size);
+                ready[j] = true;
             }
-            luZReady[luIndex] = true;
         }
         for (int i = 0; i < k; i++) {
             int cp = tab[tabActive[i]][2];
