@@ -27,7 +27,7 @@ import org.ringsweep.runner.engine.FailureKind;
  *     {@code i1(t) = v1(t)/Z0 − [v2(t−TD)/Z0 + i2(t−TD)]} and the same with the ports swapped,
  *     the delayed values interpolated linearly in the stored history: the delay is exact, not
  *     rounded to the step. At DC a line is a direct connection of its ports.</li>
- * <li>Largest step {@code h = min(maxStep, shortest delay / 2)}, so every delayed value lies
+ * <li>Base step {@code h = min(maxStep, shortest delay / 2)}, so every delayed value lies
  *     at least one step in the accepted past; breakpoints (PWL corners, timed-resistor corners, table-scale corners,
  *     the stop time) are hit exactly, a step that would end within 1 % of a step before one is
  *     stretched to it.</li>
@@ -35,8 +35,13 @@ import org.ringsweep.runner.engine.FailureKind;
  *     the difference to the quadratic through the last three points (Milne's device); above
  *     {@value #LTE_RELATIVE} of the largest source voltage the step is redone at half the size
  *     (down to h/2^{@value #MAX_HALVINGS}), and it doubles back while the estimate stays under a
- *     tenth of that. The last {@value #FACTOR_CACHE} factorisations are kept by rule, step and
- *     conductances, so switching between step sizes does not re-factor each time.</li>
+ *     tenth of that. When the analysis's step is the elaborator's automatic one
+ *     ({@link Transient#stepAuto()}), the step may also double beyond h in the same way (not
+ *     within {@value #CALM_STEPS} steps of a rejection, and back to h at a sharp corner), up to
+ *     the ceiling of {@code stepCeiling}: the elaborator's rule is a resolution rule for
+ *     ngspice, while this engine's own error control guards the accuracy; a user's explicit step
+ *     is honoured as the largest step. The last {@value #FACTOR_CACHE} factorisations are kept
+ *     by rule, step and conductances, so switching between step sizes does not re-factor each time.</li>
  * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each sharp breakpoint (the
  *     slope changing by more than {@value #SHARP_CORNER} of itself: a ramp's start or end, not
  *     the points of a finely sampled curve) damp the trapezoidal rule's numerical ringing at a
