@@ -935,11 +935,7 @@ final class TransientSolver {
                 return false;
             }
             if (p != c) {
-                for (int j = 0; j < k; j++) {
-                    double tmp = m[p * k + j];
-                    m[p * k + j] = m[c * k + j];
-                    m[c * k + j] = tmp;
-                }
+                DenseLu.swapRows(m, k, p, c);
                 double tmp = r[p];
                 r[p] = r[c];
                 r[c] = tmp;
