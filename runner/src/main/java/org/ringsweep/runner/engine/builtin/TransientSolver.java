@@ -455,81 +455,37 @@ final class TransientSolver {
         times[count] = 0;
         record(out, probeIndex, count++);
 
-        double t = 0;
-        int damped = DAMPED_STEPS;
-        int next = 0;
-        double tiny = 1e-6 * h;
-        double lteTol = LTE_RELATIVE * referenceVoltage();
-        double[] saved = new double[size];
-        double[] back1 = new double[nodes];
-        double[] back2 = new double[nodes];
-        double t1 = 0;
-        double t2 = 0;
-        int smooth = 1; // accepted points since the last sharp corner, that one included
-        // The step is h·2^−level: positive levels halve it for the truncation error, negative ones
-        // (only when the step is the engine's own choice) double it up to the ceiling.
-        double ceiling = stepCeiling(h);
-        int lowest = 0;
+        now = 0;
+        damped = DAMPED_STEPS;
+        next = 0;
+        tiny = 1e-6 * h;
+        lteTol = LTE_RELATIVE * referenceVoltage();
+        saved = new double[size];
+        back1 = new double[nodes];
+        back2 = new double[nodes];
+        t1 = 0;
+        t2 = 0;
+        smooth = 1;
+        baseStep = h;
+        ceiling = stepCeiling(h);
+        lowest = 0;
         while (lowest > -MAX_DOUBLINGS && h * (1L << -lowest) < ceiling) {
             lowest--;
         }
-        int halvings = 0;
-        int calm = 0; // accepted steps since the last rejection
-        while (t < stop - tiny) {
-            while (breaks[next] <= t + tiny) {
-                next++;
-            }
-            double bp = breaks[next];
-            double hTry = halvings >= 0 ? h / (1 << halvings) : Math.min(ceiling, h * (1L << -halvings));
-            double tn = t + hTry;
-            boolean corner = false;
-            if (tn >= bp - 0.01 * hTry) {
-                tn = bp;
-                corner = sharp[next];
-            }
-            double dt = tn - t;
-            Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
-            System.arraycopy(x, 0, saved, 0, size);
-            solvePoint(rule, dt, tn);
-            double ratio = rule == Rule.TRAPEZOID && smooth >= 3 ? truncationError(saved, t, back1, t1, back2, t2, tn) / lteTol : 0;
-            if (ratio > 1 && halvings < MAX_HALVINGS) {
-                // Redo the step at half the size: nothing of it was accepted (the state moves only in accept).
-                System.arraycopy(saved, 0, x, 0, size);
-                halvings++;
-                rejected++;
-                calm = 0;
-                continue;
-            }
-            calm++;
-            if (ratio < 0.1 && halvings > lowest && !corner && (halvings > 0 || smooth >= 3 && calm > CALM_STEPS)) {
-                halvings--; // the error grows as h³: a doubled step stays under the tolerance
-            }
-            if (corner) {
-                halvings = Math.max(halvings, 0); // the damped steps after a sharp corner: not beyond the base step
-            }
-            accept(rule, dt, tn);
-            double[] spareBack = back2;
-            back2 = back1;
-            back1 = spareBack;
-            System.arraycopy(saved, 0, back1, 0, nodes);
-            t2 = t1;
-            t1 = t;
-            smooth = corner ? 1 : smooth + 1;
-            if (count == times.length) {
-                times = Arrays.copyOf(times, count * 2);
-                for (int i = 0; i < out.length; i++) {
-                    out[i] = Arrays.copyOf(out[i], count * 2);
-                }
-            }
-            times[count] = tn;
-            record(out, probeIndex, count++);
-            t = tn;
-            damped = corner ? DAMPED_STEPS : Math.max(0, damped - 1);
-            if (count % CLOCK_EVERY == 0 && System.nanoTime() > deadlineNanos) {
-                throw new SolveException(FailureKind.TIMEOUT, "the built-in engine ran out of time at simulated t = `"
-                        + t + "` s of `" + stop + "` s");
-            }
+        halvings = 0;
+        calm = 0;
+        this.breaks = breaks;
+        this.stop = stop;
+        this.times = times;
+        this.out = out;
+        this.count = count;
+        this.probeIndex = probeIndex;
+        while (now < stop - tiny) {
+            advance();
         }
+        times = this.times;
+        out = this.out;
+        count = this.count;
         Map<String, double[]> signals = new LinkedHashMap<>();
         double[] axis = Arrays.copyOf(times, count);
         for (int i = 0; i < names.length; i++) {
@@ -543,6 +499,102 @@ final class TransientSolver {
             signals.put(names[i], values);
         }
         return Waveforms.of(axis, signals, false);
+    }
+
+    // State of the time loop (one solve), in fields so that one step is a method of its own.
+    private double now;
+    private int damped;
+    private int next;
+    private double tiny;
+    private double lteTol;
+    private double[] saved;
+    private double[] back1;
+    private double[] back2;
+    private double t1;
+    private double t2;
+    /** Accepted points since the last sharp corner, that one included. */
+    private int smooth;
+    private double baseStep;
+    private double ceiling;
+    /**
+     * The step is baseStep·2^−halvings: positive values halve it for the truncation error,
+     * negative ones (only when the step is the engine's own choice) double it up to the ceiling,
+     * down to {@code lowest}.
+     */
+    private int halvings;
+    private int lowest;
+    /** Accepted steps since the last rejection. */
+    private int calm;
+    private double[] breaks;
+    private double stop;
+    private double[] times;
+    private double[][] out;
+    private int count;
+    private int[] probeIndex;
+
+    /**
+     * One attempt at the next time point: accepted (and recorded), or rejected for its
+     * truncation error and left to be redone smaller. A method of its own, called every step, so
+     * the JIT compiles the per-step work early and whole, not through the time loop's method,
+     * which is entered once per solve.
+     */
+    private void advance() {
+        double t = now;
+        double h = baseStep;
+        while (breaks[next] <= t + tiny) {
+            next++;
+        }
+        double bp = breaks[next];
+        double hTry = halvings >= 0 ? h / (1 << halvings) : Math.min(ceiling, h * (1L << -halvings));
+        double tn = t + hTry;
+        boolean corner = false;
+        if (tn >= bp - 0.01 * hTry) {
+            tn = bp;
+            corner = sharp[next];
+        }
+        double dt = tn - t;
+        Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
+        System.arraycopy(x, 0, saved, 0, size);
+        solvePoint(rule, dt, tn);
+        double ratio = rule == Rule.TRAPEZOID && smooth >= 3 ? truncationError(saved, t, back1, t1, back2, t2, tn) / lteTol : 0;
+        if (ratio > 1 && halvings < MAX_HALVINGS) {
+            // Redo the step at half the size: nothing of it was accepted (the state moves only in accept).
+            System.arraycopy(saved, 0, x, 0, size);
+            halvings++;
+            rejected++;
+            calm = 0;
+            return;
+        }
+        calm++;
+        if (ratio < 0.1 && halvings > lowest && !corner && (halvings > 0 || smooth >= 3 && calm > CALM_STEPS)) {
+            halvings--; // the error grows as h³: a doubled step stays under the tolerance
+        }
+        if (corner) {
+            halvings = Math.max(halvings, 0); // the damped steps after a sharp corner: not beyond the base step
+        }
+        accept(rule, dt, tn);
+        double[] spareBack = back2;
+        back2 = back1;
+        back1 = spareBack;
+        System.arraycopy(saved, 0, back1, 0, nodes);
+        t2 = t1;
+        t1 = t;
+        smooth = corner ? 1 : smooth + 1;
+        if (count == times.length) {
+            times = Arrays.copyOf(times, count * 2);
+            for (int i = 0; i < out.length; i++) {
+                out[i] = Arrays.copyOf(out[i], count * 2);
+            }
+        }
+        times[count] = tn;
+        record(out, probeIndex, count++);
+        t = tn;
+        damped = corner ? DAMPED_STEPS : Math.max(0, damped - 1);
+        if (count % CLOCK_EVERY == 0 && System.nanoTime() > deadlineNanos) {
+            throw new SolveException(FailureKind.TIMEOUT, "the built-in engine ran out of time at simulated t = `"
+                    + t + "` s of `" + stop + "` s");
+        }
+        now = t;
     }
 
     /**
