@@ -237,7 +237,7 @@ public final class Elaborator {
             notes.put("source hash", net.sourceHash());
             Circuit circuit;
             try {
-                circuit = new Circuit(title(net.name()), primitives, new Transient(maxStep, schedule.stop, maxStep), probes, notes);
+                circuit = new Circuit(title(net.name()), primitives, new Transient(maxStep, schedule.stop, maxStep, net.simulation().isStepAuto()), probes, notes);
             } catch (IllegalArgumentException e) {
                 throw new ElaborationException(netLocation, "", "", e.getMessage());
             }

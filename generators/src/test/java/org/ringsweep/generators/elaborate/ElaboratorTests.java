@@ -187,6 +187,7 @@ class ElaboratorTests {
         Elaboration slow = elaborator.elaborate(p2pWithDriver("v_high", "VCC", "rise", 1e-9, "r_out", 20.0), "typ");
         assertEquals(62.5e-12, slow.circuit().analysis().maxStep(), 1e-24);
         assertEquals(slow.circuit().analysis().maxStep(), slow.circuit().analysis().step());
+        assertTrue(slow.circuit().analysis().stepAuto(), "formats.md: `step: auto` is the tool's own choice");
         Net shortLine = TestNets.pointToPoint(20, 50, 100e-12).build();
         assertEquals(25e-12, elaborator.elaborate(shortLine, "typ").circuit().analysis().maxStep(), 1e-24);
     }
@@ -196,6 +197,7 @@ class ElaboratorTests {
         Net net = TestNets.pointToPoint(20, 50, 1e-9).simulation(new SimulationSettings(30e-9, 10e-12)).build();
         Elaboration e = elaborator.elaborate(net, "typ");
         assertEquals(10e-12, e.circuit().analysis().maxStep());
+        assertFalse(e.circuit().analysis().stepAuto(), "formats.md: an explicit `simulation.step` is the user's");
         assertEquals(30e-9, e.circuit().analysis().stop());
         assertEquals(30e-9, e.edges().get(e.edges().size() - 1).end());
     }

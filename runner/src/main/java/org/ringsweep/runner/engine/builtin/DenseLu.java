@@ -142,13 +142,18 @@ final class DenseLu {
     }
 
     private void swapRows(int p, int k) {
-        for (int j = 0; j < n; j++) {
-            double t = lu[p * n + j];
-            lu[p * n + j] = lu[k * n + j];
-            lu[k * n + j] = t;
-        }
+        swapRows(lu, n, p, k);
         int t = perm[p];
         perm[p] = perm[k];
         perm[k] = t;
+    }
+
+    /** Swaps rows p and k of the row-major n-column matrix {@code a}. */
+    static void swapRows(double[] a, int n, int p, int k) {
+        for (int j = 0; j < n; j++) {
+            double t = a[p * n + j];
+            a[p * n + j] = a[k * n + j];
+            a[k * n + j] = t;
+        }
     }
 }

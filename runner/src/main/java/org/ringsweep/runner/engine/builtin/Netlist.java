@@ -142,6 +142,13 @@ final class Netlist {
         return "a branch current (voltage source, inductor or line) #" + (unknown - nodeNames.size());
     }
 
+    /** Whether a lossy line was cut into sections (whose lumped loss the history interpolation rounds off at long steps). */
+    boolean hasLossyLine() {
+        return hasLossyLine;
+    }
+
+    private boolean hasLossyLine;
+
     /** Shortest line (or line section) delay (s), or +∞ without lines. */
     double shortestDelay() {
         return lineDelay.stream().mapToDouble(Double::doubleValue).min().orElse(Double.POSITIVE_INFINITY);
@@ -191,6 +198,7 @@ final class Netlist {
      * of its two ports. Port 1 sides refer to {@code aRef}, port 2 sides to {@code bRef}.
      */
     private void lossyLine(Primitive.LossyLine t) {
+        hasLossyLine = true;
         int n = sectionsFor(t);
         double z0 = Math.sqrt(t.lPerM() / t.cPerM());
         double delay = t.length() * Math.sqrt(t.lPerM() * t.cPerM()) / n;

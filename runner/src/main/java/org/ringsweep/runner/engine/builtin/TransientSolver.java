@@ -27,7 +27,7 @@ import org.ringsweep.runner.engine.FailureKind;
  *     {@code i1(t) = v1(t)/Z0 − [v2(t−TD)/Z0 + i2(t−TD)]} and the same with the ports swapped,
  *     the delayed values interpolated linearly in the stored history: the delay is exact, not
  *     rounded to the step. At DC a line is a direct connection of its ports.</li>
- * <li>Largest step {@code h = min(maxStep, shortest delay / 2)}, so every delayed value lies
+ * <li>Base step {@code h = min(maxStep, shortest delay / 2)}, so every delayed value lies
  *     at least one step in the accepted past; breakpoints (PWL corners, timed-resistor corners, table-scale corners,
  *     the stop time) are hit exactly, a step that would end within 1 % of a step before one is
  *     stretched to it.</li>
@@ -35,8 +35,13 @@ import org.ringsweep.runner.engine.FailureKind;
  *     the difference to the quadratic through the last three points (Milne's device); above
  *     {@value #LTE_RELATIVE} of the largest source voltage the step is redone at half the size
  *     (down to h/2^{@value #MAX_HALVINGS}), and it doubles back while the estimate stays under a
- *     tenth of that. The last {@value #FACTOR_CACHE} factorisations are kept by rule, step and
- *     conductances, so switching between step sizes does not re-factor each time.</li>
+ *     tenth of that. When the analysis's step is the elaborator's automatic one
+ *     ({@link Transient#stepAuto()}), the step may also double beyond h in the same way (not
+ *     within {@value #CALM_STEPS} steps of a rejection, and back to h at a sharp corner), up to
+ *     the ceiling of {@code stepCeiling}: the elaborator's rule is a resolution rule for
+ *     ngspice, while this engine's own error control guards the accuracy; a user's explicit step
+ *     is honoured as the largest step. The last {@value #FACTOR_CACHE} factorisations are kept
+ *     by rule, step and conductances, so switching between step sizes does not re-factor each time.</li>
  * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each sharp breakpoint (the
  *     slope changing by more than {@value #SHARP_CORNER} of itself: a ramp's start or end, not
  *     the points of a finely sampled curve) damp the trapezoidal rule's numerical ringing at a
@@ -52,8 +57,12 @@ import org.ringsweep.runner.engine.FailureKind;
  * <li>Diode junction capacitance (CJO &gt; 0): the SPICE depletion charge
  *     ({@link Junction#charge}), integrated with the step's rule from the charge
  *     ({@code i = (q − qₙ)/h}, or {@code 2(q − qₙ)/h − iₙ}), linearised with {@code Cj(v)·(1 or 2)/h}.</li>
+ * <li>A table's conductance changes at every step of an edge (its scale moves); the factored
+ *     matrix keeps the one it was factored with and each solve adds the difference exactly as a
+ *     low-rank update (Sherman–Morrison–Woodbury, see {@code solveWithTables}), so tables never
+ *     make the solver re-factor.</li>
  * <li>Diodes: Newton–Raphson with SPICE's {@code pnjlim} limiting. The factored matrix is reused
- *     while each diode's (and table's) conductance stays within {@value #CHORD_RELATIVE} (relative) plus
+ *     while each diode's conductance stays within {@value #CHORD_RELATIVE} (relative) plus
  *     {@value #CHORD_ABSOLUTE} S of the factored one (a chord iteration; its right-hand side
  *     uses the true junction current, so its fixed point is the exact solution). A point is
  *     accepted when no voltage was limited, the solution moved within {@code reltol}/{@code vntol}
@@ -102,6 +111,17 @@ final class TransientSolver {
      * pass on: 1 % of the swing on a 241 mm lossy line, which no truncation-error estimate sees.)
      */
     static final double LINE_STEP = 0.5;
+    /**
+     * The step the truncation-error control may grow to on a net of lossless lines only, as a
+     * fraction of the shortest delay: under one delay every delayed value still lies in the
+     * accepted past, also after a step is stretched by up to 1 % onto a breakpoint.
+     */
+    static final double LOSSLESS_CEILING = 0.99;
+    /**
+     * Solves in a row after which a table conductance that differs from the factored one is
+     * factored in (see {@code solveWithTables}) instead of updated at every solve.
+     */
+    static final int REBASE_AFTER = 16;
     /** Factorisations kept for reuse (rules × step sizes). */
     static final int FACTOR_CACHE = 6;
     /**
@@ -110,6 +130,15 @@ final class TransientSolver {
      * (never beyond the largest step) when the estimate falls under a tenth of it.
      */
     static final double LTE_RELATIVE = 2e-4;
+    /** Fewest steps across the shortest transition of a source (a ramp) when the step grows. */
+    static final double EDGE_POINTS = 10;
+    /**
+     * Steps accepted after a rejection before the step may grow beyond the base step again: a
+     * step that has just met an edge would otherwise double into it and be redone.
+     */
+    static final int CALM_STEPS = 2;
+    /** The step control doubles the base step at most this many times (when the step is the engine's own choice). */
+    static final int MAX_DOUBLINGS = 3;
     /** The smallest step is the largest one over 2^this. */
     static final int MAX_HALVINGS = 5;
     /** How many steps between two looks at the wall clock. */
@@ -200,11 +229,31 @@ final class TransientSolver {
     private final long[] luGeneration = new long[FACTOR_CACHE];
     private final long[] luUsed = new long[FACTOR_CACHE];
     private DenseLu lu;
+    /** The cache entry {@link #lu} is. */
+    private int luIndex;
+    /**
+     * Per cache entry: the table conductances stamped into its factorisation, and (once needed)
+     * {@code Z = A⁻¹·U}, column j = the solution for table j's unit current pair (n values per
+     * table), for the low-rank update of {@link #solveWithTables}.
+     */
+    private final double[][] luTabG = new double[FACTOR_CACHE][];
+    private final double[][] luZ = new double[FACTOR_CACHE][];
+    private final boolean[][] luZReady = new boolean[FACTOR_CACHE][];
+    /** Scratch of the low-rank update: the small k × k system and its right-hand side. */
+    private final double[] woodM;
+    private final double[] woodR;
+    private final double[] tabDelta;
+    private final int[] tabActive;
+    /** Per table: how many solves in a row its conductance has not changed, and its value at the last solve. */
+    private final int[] tabSame;
+    private final double[] tabLastG;
     private long generation;
     private long uses;
     private final double[] factoredTrG;
     /** The spare right-hand side / solution vector (swapped with {@link #x}). */
     private double[] spare;
+    private final double[] spareColumn;
+    private final double[] savedRhs;
     private int factorCount;
 
     TransientSolver(Circuit circuit, Netlist net, long deadlineNanos) {
@@ -288,14 +337,80 @@ final class TransientSolver {
             trTable[k] = new PwlTable(tresEl[k].times(), tresEl[k].ohms());
         }
         factoredTrG = new double[tres.length];
+        for (int i = 0; i < FACTOR_CACHE; i++) {
+            luTabG[i] = new double[tab.length];
+            luZ[i] = new double[tab.length * size];
+            luZReady[i] = new boolean[tab.length];
+        }
+        woodM = new double[tab.length * tab.length];
+        woodR = new double[tab.length];
+        tabDelta = new double[tab.length];
+        tabActive = new int[tab.length];
+        tabSame = new int[tab.length];
+        tabLastG = new double[tab.length];
         matrix = new double[size * size];
         Arrays.fill(luGeneration, -1);
         spare = new double[size];
+        spareColumn = new double[size];
+        savedRhs = new double[size];
     }
 
     /** The time step the solve uses (s). */
     double step() {
         return Math.min(analysis.maxStep(), LINE_STEP * net.shortestDelay());
+    }
+
+    /**
+     * The largest step the truncation-error control may grow to (s). The base step when the
+     * analysis's step was set explicitly (a user's step is honoured). Otherwise the base step is
+     * the elaborator's resolution rule for ngspice (a fraction of the shortest ramp and of every
+     * long line's delay), which this engine's own error control need not keep in the flat
+     * stretches between edges: the step may double up to {@value #MAX_DOUBLINGS} times, but stays
+     * under the line bound of the method of characteristics ({@value #LOSSLESS_CEILING} of the
+     * shortest delay, {@value #LINE_STEP} of it with lossy-line sections) and under
+     * 1/{@value #EDGE_POINTS} of the shortest transition of any source, timed resistor or table
+     * scale, so an edge keeps a resolution of its own whatever the error estimate says.
+     *
+     * @param base the base step (s)
+     */
+    private double stepCeiling(double base) {
+        if (!analysis.stepAuto()) {
+            return base;
+        }
+        double lineBound = (net.hasLossyLine() ? LINE_STEP : LOSSLESS_CEILING) * net.shortestDelay();
+        double edge = Double.POSITIVE_INFINITY;
+        for (Primitive p : srcEl) {
+            if (p instanceof Primitive.PwlVoltage v) {
+                edge = Math.min(edge, shortestTransition(v.times(), v.volts()));
+            }
+        }
+        for (Primitive.TimedResistor r : tresEl) {
+            edge = Math.min(edge, shortestTransition(r.times(), r.ohms()));
+        }
+        for (Primitive.TableCurrent tc : net.tables) {
+            edge = Math.min(edge, shortestTransition(tc.scaleTimes(), tc.scale()));
+        }
+        return Math.max(base, Math.min(Math.min(lineBound, base * (1L << MAX_DOUBLINGS)), edge / EDGE_POINTS));
+    }
+
+    /**
+     * The shortest transition of a function of time held outside its points (s): a run of
+     * consecutive points over which it keeps changing (a ramp, a sampled switching waveform),
+     * from the last point before the change to the first after it; +∞ when it never changes.
+     */
+    static double shortestTransition(double[] t, double[] v) {
+        double shortest = Double.POSITIVE_INFINITY;
+        int start = -1;
+        for (int i = 1; i <= t.length; i++) {
+            boolean changing = i < t.length && v[i] != v[i - 1];
+            if (changing && start < 0) {
+                start = i - 1;
+            } else if (!changing && start >= 0) {
+                shortest = Math.min(shortest, t[i - 1] - t[start]);
+                start = -1;
+            }
+        }
+        return shortest;
     }
 
     /** How many times the transient matrix was factored (for the benchmark's notes). */
@@ -340,85 +455,37 @@ final class TransientSolver {
         times[count] = 0;
         record(out, probeIndex, count++);
 
-        double t = 0;
-        int damped = DAMPED_STEPS;
-        int next = 0;
-        double tiny = 1e-6 * h;
-        double[] delayed = new double[4];
-        double lteTol = LTE_RELATIVE * referenceVoltage();
-        double[] saved = new double[size];
-        double[] back1 = new double[nodes];
-        double[] back2 = new double[nodes];
-        double t1 = 0;
-        double t2 = 0;
-        int smooth = 1; // accepted points since the last sharp corner, that one included
-        int halvings = 0;
-        while (t < stop - tiny) {
-            while (breaks[next] <= t + tiny) {
-                next++;
-            }
-            double bp = breaks[next];
-            double hTry = h / (1 << halvings);
-            double tn = t + hTry;
-            boolean corner = false;
-            if (tn >= bp - 0.01 * hTry) {
-                tn = bp;
-                corner = sharp[next];
-            }
-            double dt = tn - t;
-            Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
-            for (int l = 0; l < line.length; l++) {
-                history[l].at(tn - lineTd[l], delayed);
-                lineIh[2 * l] = lineG[l] * delayed[2] + delayed[3];
-                lineIh[2 * l + 1] = lineG[l] * delayed[0] + delayed[1];
-            }
-            for (int k = 0; k < tres.length; k++) {
-                trSeg[k] = trTable[k].segmentOf(tn, trSeg[k]);
-                double g = 1 / trTable[k].value(tn, trSeg[k]);
-                if (Math.abs(g - trG[k]) > TIMED_CHORD * Math.abs(trG[k])) {
-                    trG[k] = g; // else the factored value stands: a slow creep need not re-factor every step
-                }
-            }
-            scales(tn);
-            System.arraycopy(x, 0, saved, 0, size);
-            if (!newton(rule, dt, tn, 1.0)) {
-                throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
-                        + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
-            }
-            double ratio = rule == Rule.TRAPEZOID && smooth >= 3 ? truncationError(saved, t, back1, t1, back2, t2, tn) / lteTol : 0;
-            if (ratio > 1 && halvings < MAX_HALVINGS) {
-                // Redo the step at half the size: nothing of it was accepted (the state moves only in accept).
-                System.arraycopy(saved, 0, x, 0, size);
-                halvings++;
-                rejected++;
-                continue;
-            }
-            if (ratio < 0.1 && halvings > 0 && !corner) {
-                halvings--; // the error grows as h³: a doubled step stays under the tolerance
-            }
-            accept(rule, dt, tn);
-            double[] spareBack = back2;
-            back2 = back1;
-            back1 = spareBack;
-            System.arraycopy(saved, 0, back1, 0, nodes);
-            t2 = t1;
-            t1 = t;
-            smooth = corner ? 1 : smooth + 1;
-            if (count == times.length) {
-                times = Arrays.copyOf(times, count * 2);
-                for (int i = 0; i < out.length; i++) {
-                    out[i] = Arrays.copyOf(out[i], count * 2);
-                }
-            }
-            times[count] = tn;
-            record(out, probeIndex, count++);
-            t = tn;
-            damped = corner ? DAMPED_STEPS : Math.max(0, damped - 1);
-            if (count % CLOCK_EVERY == 0 && System.nanoTime() > deadlineNanos) {
-                throw new SolveException(FailureKind.TIMEOUT, "the built-in engine ran out of time at simulated t = `"
-                        + t + "` s of `" + stop + "` s");
-            }
+        now = 0;
+        damped = DAMPED_STEPS;
+        next = 0;
+        tiny = 1e-6 * h;
+        lteTol = LTE_RELATIVE * referenceVoltage();
+        saved = new double[size];
+        back1 = new double[nodes];
+        back2 = new double[nodes];
+        t1 = 0;
+        t2 = 0;
+        smooth = 1;
+        baseStep = h;
+        ceiling = stepCeiling(h);
+        lowest = 0;
+        while (lowest > -MAX_DOUBLINGS && h * (1L << -lowest) < ceiling) {
+            lowest--;
         }
+        halvings = 0;
+        calm = 0;
+        this.breaks = breaks;
+        this.stop = stop;
+        this.times = times;
+        this.out = out;
+        this.count = count;
+        this.probeIndex = probeIndex;
+        while (now < stop - tiny) {
+            advance();
+        }
+        times = this.times;
+        out = this.out;
+        count = this.count;
         Map<String, double[]> signals = new LinkedHashMap<>();
         double[] axis = Arrays.copyOf(times, count);
         for (int i = 0; i < names.length; i++) {
@@ -433,6 +500,131 @@ final class TransientSolver {
         }
         return Waveforms.of(axis, signals, false);
     }
+
+    // State of the time loop (one solve), in fields so that one step is a method of its own.
+    private double now;
+    private int damped;
+    private int next;
+    private double tiny;
+    private double lteTol;
+    private double[] saved;
+    private double[] back1;
+    private double[] back2;
+    private double t1;
+    private double t2;
+    /** Accepted points since the last sharp corner, that one included. */
+    private int smooth;
+    private double baseStep;
+    private double ceiling;
+    /**
+     * The step is baseStep·2^−halvings: positive values halve it for the truncation error,
+     * negative ones (only when the step is the engine's own choice) double it up to the ceiling,
+     * down to {@code lowest}.
+     */
+    private int halvings;
+    private int lowest;
+    /** Accepted steps since the last rejection. */
+    private int calm;
+    private double[] breaks;
+    private double stop;
+    private double[] times;
+    private double[][] out;
+    private int count;
+    private int[] probeIndex;
+
+    /**
+     * One attempt at the next time point: accepted (and recorded), or rejected for its
+     * truncation error and left to be redone smaller. A method of its own, called every step, so
+     * the JIT compiles the per-step work early and whole, not through the time loop's method,
+     * which is entered once per solve.
+     */
+    private void advance() {
+        double t = now;
+        double h = baseStep;
+        while (breaks[next] <= t + tiny) {
+            next++;
+        }
+        double bp = breaks[next];
+        double hTry = halvings >= 0 ? h / (1 << halvings) : Math.min(ceiling, h * (1L << -halvings));
+        double tn = t + hTry;
+        boolean corner = false;
+        if (tn >= bp - 0.01 * hTry) {
+            tn = bp;
+            corner = sharp[next];
+        }
+        double dt = tn - t;
+        Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
+        System.arraycopy(x, 0, saved, 0, size);
+        solvePoint(rule, dt, tn);
+        double ratio = rule == Rule.TRAPEZOID && smooth >= 3 ? truncationError(saved, t, back1, t1, back2, t2, tn) / lteTol : 0;
+        if (ratio > 1 && halvings < MAX_HALVINGS) {
+            // Redo the step at half the size: nothing of it was accepted (the state moves only in accept).
+            System.arraycopy(saved, 0, x, 0, size);
+            halvings++;
+            rejected++;
+            calm = 0;
+            return;
+        }
+        calm++;
+        if (ratio < 0.1 && halvings > lowest && !corner && (halvings > 0 || smooth >= 3 && calm > CALM_STEPS)) {
+            halvings--; // the error grows as h³: a doubled step stays under the tolerance
+        }
+        if (corner) {
+            halvings = Math.max(halvings, 0); // the damped steps after a sharp corner: not beyond the base step
+        }
+        accept(rule, dt, tn);
+        double[] spareBack = back2;
+        back2 = back1;
+        back1 = spareBack;
+        System.arraycopy(saved, 0, back1, 0, nodes);
+        t2 = t1;
+        t1 = t;
+        smooth = corner ? 1 : smooth + 1;
+        if (count == times.length) {
+            times = Arrays.copyOf(times, count * 2);
+            for (int i = 0; i < out.length; i++) {
+                out[i] = Arrays.copyOf(out[i], count * 2);
+            }
+        }
+        times[count] = tn;
+        record(out, probeIndex, count++);
+        t = tn;
+        damped = corner ? DAMPED_STEPS : Math.max(0, damped - 1);
+        if (count % CLOCK_EVERY == 0 && System.nanoTime() > deadlineNanos) {
+            throw new SolveException(FailureKind.TIMEOUT, "the built-in engine ran out of time at simulated t = `"
+                    + t + "` s of `" + stop + "` s");
+        }
+        now = t;
+    }
+
+    /**
+     * Solves the time point {@code tn}, a step {@code dt} after the last accepted one, into
+     * {@link #x}: the lines' history sources, the timed resistors and table scales at tn, then
+     * Newton. Apart from the time loop so the JIT compiles the per-step work after a few solves
+     * (it is called every step), not only once the loop's method has been entered hundreds of times.
+     */
+    private void solvePoint(Rule rule, double dt, double tn) {
+        for (int l = 0; l < line.length; l++) {
+            history[l].at(tn - lineTd[l], delayed);
+            lineIh[2 * l] = lineG[l] * delayed[2] + delayed[3];
+            lineIh[2 * l + 1] = lineG[l] * delayed[0] + delayed[1];
+        }
+        for (int k = 0; k < tres.length; k++) {
+            trSeg[k] = trTable[k].segmentOf(tn, trSeg[k]);
+            double g = 1 / trTable[k].value(tn, trSeg[k]);
+            if (Math.abs(g - trG[k]) > TIMED_CHORD * Math.abs(trG[k])) {
+                trG[k] = g; // else the factored value stands: a slow creep need not re-factor every step
+            }
+        }
+        scales(tn);
+        if (!newton(rule, dt, tn, 1.0)) {
+            throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
+                    + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
+        }
+    }
+
+    /** Scratch for a line's delayed values: v1, i1, v2, i2. */
+    private final double[] delayed = new double[4];
 
     private void record(double[][] out, int[] probeIndex, int at) {
         for (int i = 0; i < probeIndex.length; i++) {
@@ -645,7 +837,7 @@ final class TransientSolver {
             stampSources(b, t, scale);
             stampHistory(b, rule, h);
             stampNonlinearCurrents(b);
-            lu.solve(b);
+            solveWithTables(b, t);
             solves++;
             boolean converged = !limited && (iter > 0 ? close(b, x, size) : true) && linearisationHolds(b);
             double[] previous = x;
@@ -670,28 +862,154 @@ final class TransientSolver {
             if (luGeneration[i] == generation && luRule[i] == rule && luH[i] == h) {
                 luUsed[i] = ++uses;
                 lu = lus[i];
+                luIndex = i;
                 return;
             }
             if (luUsed[i] < luUsed[oldest]) {
                 oldest = i;
             }
         }
-        if (lus[oldest] == null) {
-            lus[oldest] = new DenseLu(size);
+        factorInto(oldest, rule, h, t);
+    }
+
+    /** Factors the transient matrix with the present conductances into cache entry {@code slot} and makes it {@link #lu}. */
+    private void factorInto(int slot, Rule rule, double h, double t) {
+        if (lus[slot] == null) {
+            lus[slot] = new DenseLu(size);
         }
         Arrays.fill(matrix, 0);
         stampLinear(matrix, size, rule, h);
         stampNonlinear(matrix, size);
-        int bad = lus[oldest].factor(matrix);
+        int bad = lus[slot].factor(matrix);
         if (bad >= 0) {
             throw singular(bad, "at t = `" + t + "` s");
         }
         factorCount++;
-        luGeneration[oldest] = generation;
-        luRule[oldest] = rule;
-        luH[oldest] = h;
-        luUsed[oldest] = ++uses;
-        lu = lus[oldest];
+        luGeneration[slot] = generation;
+        luRule[slot] = rule;
+        luH[slot] = h;
+        luUsed[slot] = ++uses;
+        lu = lus[slot];
+        luIndex = slot;
+        System.arraycopy(tabG, 0, luTabG[slot], 0, tab.length);
+        Arrays.fill(luZReady[slot], false);
+    }
+
+    /**
+     * Solves the transient system with the tables' present conductances, from a factorisation
+     * that holds other ones: an IBIS table's conductance {@code s(t)·dy/dv} changes at every step
+     * of an edge, and re-factoring for each would dominate the solve. The change is a low-rank
+     * update (one VCCS per table: {@code ΔA = Σ Δgⱼ·uⱼ·vⱼᵀ}, {@code uⱼ = e₊ − e₋} the current's
+     * nodes, {@code vⱼ = e_cp − e_cm} the controlling ones), so the Sherman–Morrison–Woodbury
+     * identity gives the exact solution of the updated system,
+     * {@code x = y − Z·(I + D·Vᵀ·Z)⁻¹·D·Vᵀ·y} with {@code y = A⁻¹b}, {@code Z = A⁻¹U},
+     * {@code D = diag(Δg)}: one solve plus a k × k system (k tables) instead of a factorisation.
+     * Newton's iterates are the same as with a fresh factorisation, up to rounding. When the
+     * small system has no usable pivot the matrix is factored with the present conductances.
+     */
+    private void solveWithTables(double[] b, double t) {
+        double[] base = luTabG[luIndex];
+        int k = 0; // only the tables whose conductance differs from the factored one take part
+        boolean settled = false;
+        for (int j = 0; j < tab.length; j++) {
+            tabSame[j] = tabG[j] == tabLastG[j] ? tabSame[j] + 1 : 0;
+            tabLastG[j] = tabG[j];
+            double delta = tabG[j] - base[j];
+            if (delta != 0) {
+                tabDelta[k] = delta;
+                tabActive[k++] = j;
+                settled |= tabSame[j] >= REBASE_AFTER;
+            }
+        }
+        if (settled) {
+            // A table has kept a conductance other than the factored one for a while (a clamp
+            // on a new segment, a driver after its edge): factor it in rather than update every solve.
+            factorInto(luIndex, rule, h, t);
+            k = 0;
+        }
+        if (k == 0) {
+            lu.solve(b);
+            return;
+        }
+        System.arraycopy(b, 0, savedRhs, 0, size);
+        lu.solve(b);
+        double[] z = luZ[luIndex];
+        boolean[] ready = luZReady[luIndex];
+        for (int i = 0; i < k; i++) {
+            int j = tabActive[i];
+            if (!ready[j]) {
+                // Z's column for table j, computed once per factorisation when the table first takes part.
+                Arrays.fill(spareColumn, 0);
+                inject(spareColumn, tab[j][0], tab[j][1], 1); // u = e₊ − e₋: the stamp's rows
+                lu.solve(spareColumn);
+                System.arraycopy(spareColumn, 0, z, j * size, size);
+                ready[j] = true;
+            }
+        }
+        for (int i = 0; i < k; i++) {
+            int cp = tab[tabActive[i]][2];
+            int cm = tab[tabActive[i]][3];
+            woodR[i] = tabDelta[i] * (v(b, cp) - v(b, cm));
+            for (int j = 0; j < k; j++) {
+                int o = tabActive[j] * size;
+                woodM[i * k + j] = (i == j ? 1 : 0) + tabDelta[i] * ((cp < 0 ? 0 : z[o + cp]) - (cm < 0 ? 0 : z[o + cm]));
+            }
+        }
+        if (!solveSmall(woodM, woodR, k)) {
+            // Rare: re-factor with the present conductances and solve afresh.
+            generation++;
+            factorFor(rule, h, t);
+            System.arraycopy(savedRhs, 0, b, 0, size);
+            lu.solve(b);
+            return;
+        }
+        for (int j = 0; j < k; j++) {
+            double w = woodR[j];
+            if (w != 0) {
+                int o = tabActive[j] * size;
+                for (int i = 0; i < size; i++) {
+                    b[i] -= z[o + i] * w;
+                }
+            }
+        }
+    }
+
+    /** Gaussian elimination with partial pivoting of a small k × k system in place; r receives the solution. */
+    private static boolean solveSmall(double[] m, double[] r, int k) {
+        for (int c = 0; c < k; c++) {
+            int p = c;
+            for (int i = c + 1; i < k; i++) {
+                if (Math.abs(m[i * k + c]) > Math.abs(m[p * k + c])) {
+                    p = i;
+                }
+            }
+            if (!(Math.abs(m[p * k + c]) > 1e-12)) {
+                return false;
+            }
+            if (p != c) {
+                DenseLu.swapRows(m, k, p, c);
+                double tmp = r[p];
+                r[p] = r[c];
+                r[c] = tmp;
+            }
+            for (int i = c + 1; i < k; i++) {
+                double f = m[i * k + c] / m[c * k + c];
+                if (f != 0) {
+                    for (int j = c; j < k; j++) {
+                        m[i * k + j] -= f * m[c * k + j];
+                    }
+                    r[i] -= f * r[c];
+                }
+            }
+        }
+        for (int c = k - 1; c >= 0; c--) {
+            double s = r[c];
+            for (int j = c + 1; j < k; j++) {
+                s -= m[c * k + j] * r[j];
+            }
+            r[c] = s / m[c * k + c];
+        }
+        return true;
     }
 
     /**
@@ -750,10 +1068,10 @@ final class TransientSolver {
             tabIter[k] = vc;
             tabIterSeg[k] = seg;
             double g = tabS[k] * tabY[k].slope(seg);
-            if (!keepFactored || Math.abs(g - tabG[k]) > CHORD_ABSOLUTE + CHORD_RELATIVE * Math.abs(tabG[k])) {
-                tabG[k] = g;
+            if (!keepFactored && g != tabG[k]) {
                 nonlinearChanged = true;
             }
+            tabG[k] = g; // in a transient step the low-rank update of solveWithTables takes it exactly
             tabIeq[k] = tabS[k] * tabY[k].value(vc, seg) - tabG[k] * vc;
         }
         return limited;

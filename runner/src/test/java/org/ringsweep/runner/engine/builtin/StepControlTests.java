@@ -1,0 +1,64 @@
+package org.ringsweep.runner.engine.builtin;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.ringsweep.api.circuit.Circuit;
+import org.ringsweep.api.circuit.Primitive;
+import org.ringsweep.api.circuit.Transient;
+import org.ringsweep.api.wave.Waveforms;
+
+/**
+ * The built-in engine's step control: an explicit maximum step is never exceeded, an automatic
+ * one may grow where the waveform is flat, and the waveform stays right either way.
+ */
+class StepControlTests {
+    private static final double TD = 1e-9;
+    private static final double T0 = 1e-9;
+    private static final double RAMP = 0.2e-9;
+    private static final double STEP = 10e-12;
+
+    /** lines-and-terminations.md §2, worked example 1: 3.3 V through 15 Ω into a 50 Ω, 1 ns line, open far end. */
+    private static Circuit example1(boolean stepAuto) {
+        return Circuits.of(List.of(
+                Circuits.step("vs", "src", T0, RAMP, 3.3),
+                new Primitive.Resistor("rs", "src", "near", 15),
+                new Primitive.LosslessLine("t1", "near", "0", "far", "0", 50, TD),
+                new Primitive.Resistor("rl", "far", "0", 1e9)),
+                new Transient(STEP, 14e-9, STEP, stepAuto), "far");
+    }
+
+    private static double largestStep(Waveforms w) {
+        double largest = 0;
+        for (int i = 1; i < w.size(); i++) {
+            largest = Math.max(largest, w.time(i) - w.time(i - 1));
+        }
+        return largest;
+    }
+
+    @Test
+    void anExplicitStepIsNeverExceeded() {
+        Waveforms w = Circuits.solve(example1(false));
+        // Transient.maxStep is the largest internal step (SPICE's TMAX, ngspice.md); 1e-9 s of slack for rounding.
+        assertTrue(largestStep(w) <= STEP * (1 + 1e-9), "largest step " + largestStep(w));
+    }
+
+    @Test
+    void anAutomaticStepGrowsOnThePlateausAndKeepsTheBounceLevels() {
+        Waveforms w = Circuits.solve(example1(true));
+        double largest = largestStep(w);
+        // It grows (common practice for error-controlled steps), but stays under the line delay (the method
+        // of characteristics needs h ≤ TD) and under a tenth of the source ramp.
+        assertTrue(largest > 1.5 * STEP, "largest step " + largest);
+        assertTrue(largest <= RAMP / 10 * (1 + 1e-9), "largest step " + largest);
+        // lines-and-terminations.md §2, worked example 1: far-end plateaus 5.07692, 2.34320, 3.81520, 3.02258 V
+        // on ((2n+1)·TD, (2n+3)·TD) after the edge; read mid-plateau, within 0.2 % of the 3.3 V swing.
+        double[] far = {5.07692, 2.34320, 3.81520, 3.02258};
+        for (int n = 0; n < far.length; n++) {
+            double t = T0 + RAMP / 2 + (2 * n + 2) * TD;
+            assertEquals(far[n], Circuits.at(w, "far", t), 0.002 * 3.3, "far end on plateau " + n);
+        }
+    }
+}
