@@ -155,11 +155,7 @@ public final class OverheadBenchmark {
      * start-up, class loading and JIT warm-up a command-line run pays.
      */
     private static double freshJvmCheck(Optional<String> archiveOption, List<String> args) throws IOException, InterruptedException {
-        List<String> command = new ArrayList<>();
-        command.add(ProcessHandle.current().info().command().orElse("java"));
-        archiveOption.ifPresent(command::add);
-        command.addAll(List.of("-cp", System.getProperty("java.class.path"), Main.class.getName()));
-        command.addAll(args);
+        List<String> command = ChildJvm.ringsweep(archiveOption.stream().toList(), args);
         long t = System.nanoTime();
         Process p = new ProcessBuilder(command)
                 .redirectOutput(ProcessBuilder.Redirect.DISCARD)

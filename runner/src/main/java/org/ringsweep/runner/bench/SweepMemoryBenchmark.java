@@ -55,10 +55,9 @@ public final class SweepMemoryBenchmark {
             boolean grid = points >= 2000 && points % 1000 == 0;
             writeInputs(dir, grid ? (int) (points / 1000) : (int) points, grid ? 1000 : 0);
             Path out = dir.resolve("out");
-            String java = ProcessHandle.current().info().command().orElse("java");
-            List<String> command = List.of(java, HEAP, "-Xlog:gc:file=" + dir.resolve("gc.log"), "-cp", System.getProperty("java.class.path"),
-                    "org.ringsweep.runner.cli.Main", "sweep", dir.resolve("sweep.yaml").toString(), "--engine", "builtin",
-                    "--out", out.toString(), "--jobs", String.valueOf(jobs));
+            List<String> command = ChildJvm.ringsweep(List.of(HEAP, "-Xlog:gc:file=" + dir.resolve("gc.log")),
+                    List.of("sweep", dir.resolve("sweep.yaml").toString(), "--engine", "builtin",
+                            "--out", out.toString(), "--jobs", String.valueOf(jobs)));
             long start = System.nanoTime();
             Process child = new ProcessBuilder(command).redirectOutput(dir.resolve("sweep.out").toFile())
                     .redirectError(dir.resolve("sweep.err").toFile()).start();
