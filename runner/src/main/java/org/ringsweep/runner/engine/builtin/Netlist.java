@@ -13,7 +13,8 @@ import org.ringsweep.api.circuit.SafeName;
 /**
  * A {@link Circuit} compiled to unknown indices for modified nodal analysis: node voltages first
  * ({@code 0 … nodeCount−1}), then one branch current per voltage source and per inductor. Ground
- * is index −1. A lossy line is replaced here by lossless sections with lumped loss
+ * is index −1; a node held by a DC source to ground is not an unknown but fixed, index −2 − f
+ * ({@code eliminateFixedNodes}). A lossy line is replaced here by lossless sections with lumped loss
  * ({@link #sectionsFor}); a diode's series resistance gets an internal node (its junction and
  * depletion charge sit behind it, as in SPICE). Immutable after
  * construction; shared by nothing but its own solve.
@@ -104,6 +105,7 @@ final class Netlist {
                         + ") is not supported by the built-in engine");
             }
         }
+        eliminateFixedNodes(pendingBranch);
         // Branch currents are numbered after every node, internal nodes included.
         int next = nodeNames.size();
         for (int[] e : pendingBranch) {
@@ -111,6 +113,57 @@ final class Netlist {
         }
         branches = pendingBranch.size();
     }
+
+    /**
+     * Takes the nodes held by a DC source to ground (the rails, an IBIS buffer's clamp and pull-up
+     * references) out of the unknowns: their voltage is known, so each such source and its node
+     * leave the system, which is solved for the rest with the known voltages on the right-hand
+     * side. A board net's matrix loses a third of its unknowns this way, and the solve its work.
+     * The first source on a node fixes it; a second one stays a source (and the matrix is singular, as it is with both).
+     */
+    private void eliminateFixedNodes(List<int[]> pendingBranch) {
+        int[] map = new int[nodeNames.size()];
+        java.util.Arrays.fill(map, Integer.MIN_VALUE);
+        for (int k = 0; k < sources.size(); k++) {
+            int[] e = sources.get(k);
+            if (sourceElements.get(k) instanceof Primitive.DcVoltage v && e[1] == -1 && e[0] >= 0
+                    && map[e[0]] == Integer.MIN_VALUE) {
+                map[e[0]] = -2 - fixedVolts.size();
+                fixedVolts.add(v.volts());
+                pendingBranch.remove(e);
+                sources.remove(k);
+                sourceElements.remove(k);
+                k--;
+            }
+        }
+        if (fixedVolts.isEmpty()) {
+            return;
+        }
+        List<String> kept = new ArrayList<>();
+        for (int i = 0; i < map.length; i++) {
+            if (map[i] == Integer.MIN_VALUE) {
+                map[i] = kept.size();
+                kept.add(nodeNames.get(i));
+            }
+        }
+        nodeNames.clear();
+        nodeNames.addAll(kept);
+        nodeIndex.replaceAll((name, i) -> map[i]);
+        for (List<int[]> list : List.of(resistorNodes, capacitorNodes, timedResistorNodes, lineNodes, diodeNodes, tableNodes)) {
+            list.forEach(e -> remap(e, e.length, map));
+        }
+        inductors.forEach(e -> remap(e, 2, map));
+        sources.forEach(e -> remap(e, 2, map));
+    }
+
+    private static void remap(int[] e, int count, int[] map) {
+        for (int i = 0; i < count; i++) {
+            e[i] = e[i] < 0 ? e[i] : map[e[i]];
+        }
+    }
+
+    /** The volts of each fixed node: index −2 − f is held at {@code fixedVolts.get(f)}. */
+    final List<Double> fixedVolts = new ArrayList<>();
 
     /** Number of node voltages (ground excluded, internal nodes included). */
     int nodeCount() {
@@ -122,7 +175,7 @@ final class Netlist {
         return nodeNames.size() + branches;
     }
 
-    /** The index of a circuit node; −1 for ground. */
+    /** The index of a circuit node; −1 for ground, −2 − f for the f-th fixed node ({@link #fixedVolts}). */
     int indexOf(String node) {
         if (SafeName.GROUND.equals(node)) {
             return -1;

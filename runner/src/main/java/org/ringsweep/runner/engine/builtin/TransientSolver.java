@@ -139,6 +139,12 @@ final class TransientSolver {
     static final int CALM_STEPS = 2;
     /** The step control doubles the base step at most this many times (when the step is the engine's own choice). */
     static final int MAX_DOUBLINGS = 3;
+    /**
+     * With the engine's own step choice, a breakpoint up to this many steps ahead is reached in
+     * one step (stretched up to the ceiling) rather than a step and a sliver of a step: the
+     * sampled IBIS waveforms put a breakpoint every few tens of picoseconds.
+     */
+    static final double BREAK_STRETCH = 1.3;
     /** The smallest step is the largest one over 2^this. */
     static final int MAX_HALVINGS = 5;
     /** How many steps between two looks at the wall clock. */
@@ -218,6 +224,13 @@ final class TransientSolver {
 
     // Factorisation cache for the transient system.
     private final double[] matrix;
+    /** The volts of each fixed node (Netlist index −2 − f), and the same scaled during DC source stepping. */
+    private final double[] fixedVolts;
+    private final double[] fixedNow;
+    /** Where the assembly under way puts the currents of its entries in fixed nodes' columns (see {@link #add}). */
+    private double[] fixedSink;
+    /** Per cache entry: the known currents of the fixed nodes with that factorisation's conductances. */
+    private final double[][] luFixed = new double[FACTOR_CACHE][];
     /**
      * The last few factorisations, each for a rule, a step and a generation of the conductances
      * that do not depend on the step (timed resistors, linearised diodes and tables): a solve
@@ -349,6 +362,11 @@ final class TransientSolver {
         tabSame = new int[tab.length];
         tabLastG = new double[tab.length];
         matrix = new double[size * size];
+        fixedVolts = unbox(net.fixedVolts);
+        fixedNow = fixedVolts.clone();
+        for (int i = 0; i < FACTOR_CACHE; i++) {
+            luFixed[i] = new double[size];
+        }
         Arrays.fill(luGeneration, -1);
         spare = new double[size];
         spareColumn = new double[size];
@@ -468,6 +486,7 @@ final class TransientSolver {
         smooth = 1;
         baseStep = h;
         ceiling = stepCeiling(h);
+        stretchable = analysis.stepAuto();
         lowest = 0;
         while (lowest > -MAX_DOUBLINGS && h * (1L << -lowest) < ceiling) {
             lowest--;
@@ -516,6 +535,8 @@ final class TransientSolver {
     private int smooth;
     private double baseStep;
     private double ceiling;
+    /** Whether a step may be stretched onto a breakpoint beyond 1 % (only with the engine's own step choice). */
+    private boolean stretchable;
     /**
      * The step is baseStep·2^−halvings: positive values halve it for the truncation error,
      * negative ones (only when the step is the engine's own choice) double it up to the ceiling,
@@ -546,13 +567,18 @@ final class TransientSolver {
         }
         double bp = breaks[next];
         double hTry = halvings >= 0 ? h / (1 << halvings) : Math.min(ceiling, h * (1L << -halvings));
+        // The step is hTry itself, not (t + hTry) − t, which differs from it in the last bits and
+        // would miss the factorisation cached for hTry.
+        double dt = hTry;
         double tn = t + hTry;
         boolean corner = false;
-        if (tn >= bp - 0.01 * hTry) {
+        if (tn >= bp - 0.01 * hTry || stretchable && bp - t <= BREAK_STRETCH * hTry && bp - t <= ceiling) {
+            // On the breakpoint: also when it lies a little beyond the step (then one step, not a
+            // step and a sliver; the truncation-error check still judges the longer step).
             tn = bp;
+            dt = bp - t;
             corner = sharp[next];
         }
-        double dt = tn - t;
         Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
         System.arraycopy(x, 0, saved, 0, size);
         solvePoint(rule, dt, tn);
@@ -628,7 +654,7 @@ final class TransientSolver {
 
     private void record(double[][] out, int[] probeIndex, int at) {
         for (int i = 0; i < probeIndex.length; i++) {
-            out[i][at] = probeIndex[i] < 0 ? 0 : x[probeIndex[i]];
+            out[i][at] = v(x, probeIndex[i]);
         }
     }
 
@@ -667,6 +693,9 @@ final class TransientSolver {
             } else {
                 v = Math.max(v, Math.abs(((Primitive.DcVoltage) p).volts()));
             }
+        }
+        for (double u : fixedVolts) {
+            v = Math.max(v, Math.abs(u)); // the DC sources that hold fixed nodes
         }
         return v;
     }
@@ -765,6 +794,7 @@ final class TransientSolver {
                         "the built-in engine found no DC operating point (Newton and source stepping failed)");
             }
         }
+        System.arraycopy(fixedVolts, 0, fixedNow, 0, fixedVolts.length);
         x = Arrays.copyOf(sol, size);
         for (int c = 0; c < cap.length; c++) {
             capV[c] = v(x, cap[c][0]) - v(x, cap[c][1]);
@@ -802,9 +832,15 @@ final class TransientSolver {
     }
 
     private boolean dcNewton(double[] a, double[] b, DenseLu dcLu, double[] sol, double scale) {
+        for (int f = 0; f < fixedVolts.length; f++) {
+            fixedNow[f] = scale * fixedVolts[f];
+        }
+        double[] known = new double[dcSize];
         for (int iter = 0; iter < MAX_NEWTON; iter++) {
             boolean limited = linearise(sol, iter, false);
             Arrays.fill(a, 0);
+            fixedSink = known;
+            Arrays.fill(known, 0);
             stampLinear(a, dcSize, Rule.DC, 0);
             stampNonlinear(a, dcSize);
             int bad = dcLu.factor(a);
@@ -814,6 +850,9 @@ final class TransientSolver {
             Arrays.fill(b, 0);
             stampSources(b, 0, scale);
             stampNonlinearCurrents(b);
+            for (int i = 0; i < dcSize; i++) {
+                b[i] += known[i];
+            }
             dcLu.solve(b);
             boolean converged = !limited && (!nonlinear() || iter > 0) && close(b, sol, dcSize);
             System.arraycopy(b, 0, sol, 0, dcSize);
@@ -878,6 +917,8 @@ final class TransientSolver {
             lus[slot] = new DenseLu(size);
         }
         Arrays.fill(matrix, 0);
+        fixedSink = luFixed[slot];
+        Arrays.fill(fixedSink, 0);
         stampLinear(matrix, size, rule, h);
         stampNonlinear(matrix, size);
         int bad = lus[slot].factor(matrix);
@@ -928,10 +969,12 @@ final class TransientSolver {
             k = 0;
         }
         if (k == 0) {
+            addKnown(b, 0);
             lu.solve(b);
             return;
         }
         System.arraycopy(b, 0, savedRhs, 0, size);
+        addKnown(b, k);
         lu.solve(b);
         double[] z = luZ[luIndex];
         boolean[] ready = luZReady[luIndex];
@@ -949,7 +992,7 @@ final class TransientSolver {
         for (int i = 0; i < k; i++) {
             int cp = tab[tabActive[i]][2];
             int cm = tab[tabActive[i]][3];
-            woodR[i] = tabDelta[i] * (v(b, cp) - v(b, cm));
+            woodR[i] = tabDelta[i] * (unknownPart(b, cp) - unknownPart(b, cm));
             for (int j = 0; j < k; j++) {
                 int o = tabActive[j] * size;
                 woodM[i * k + j] = (i == j ? 1 : 0) + tabDelta[i] * ((cp < 0 ? 0 : z[o + cp]) - (cm < 0 ? 0 : z[o + cm]));
@@ -960,6 +1003,7 @@ final class TransientSolver {
             generation++;
             factorFor(rule, h, t);
             System.arraycopy(savedRhs, 0, b, 0, size);
+            addKnown(b, 0);
             lu.solve(b);
             return;
         }
@@ -970,6 +1014,28 @@ final class TransientSolver {
                 for (int i = 0; i < size; i++) {
                     b[i] -= z[o + i] * w;
                 }
+            }
+        }
+    }
+
+    /**
+     * Adds the fixed nodes' known currents to the right-hand side: those of the factorisation's
+     * conductances, and for each of the first {@code k} active tables (see {@code solveWithTables})
+     * those of its conductance change, {@code Δg·(v_cp − v_cm)} over the fixed controlling nodes.
+     */
+    private void addKnown(double[] b, int k) {
+        if (fixedVolts.length == 0) {
+            return;
+        }
+        double[] known = luFixed[luIndex];
+        for (int i = 0; i < size; i++) {
+            b[i] += known[i];
+        }
+        for (int i = 0; i < k; i++) {
+            int[] p = tab[tabActive[i]];
+            double vFixed = fixedPart(p[2]) - fixedPart(p[3]);
+            if (vFixed != 0) {
+                inject(b, p[1], p[0], tabDelta[i] * vFixed); // the update's entries in fixed columns, moved to the right
             }
         }
     }
@@ -1279,7 +1345,7 @@ final class TransientSolver {
                 + " (a node without a DC path to ground, or a loop of voltage sources, lines and inductors)");
     }
 
-    private static void conductance(double[] a, int n, int i, int j, double g) {
+    private void conductance(double[] a, int n, int i, int j, double g) {
         add(a, n, i, i, g);
         add(a, n, j, j, g);
         add(a, n, i, j, -g);
@@ -1287,16 +1353,24 @@ final class TransientSolver {
     }
 
     /** A branch current {@code br} leaving node {@code p}, entering {@code m}, with {@code v(p) − v(m)} in row br. */
-    private static void branch(double[] a, int n, int p, int m, int br) {
+    private void branch(double[] a, int n, int p, int m, int br) {
         add(a, n, p, br, 1);
         add(a, n, m, br, -1);
         add(a, n, br, p, 1);
         add(a, n, br, m, -1);
     }
 
-    private static void add(double[] a, int n, int row, int col, double value) {
-        if (row >= 0 && col >= 0) {
-            a[row * n + col] += value;
+    /**
+     * Adds a matrix entry. An entry in a fixed node's column is a known current instead: it goes to
+     * the right-hand side of the assembly under way ({@link #fixedSink}), with the node's voltage.
+     */
+    private void add(double[] a, int n, int row, int col, double value) {
+        if (row >= 0) {
+            if (col >= 0) {
+                a[row * n + col] += value;
+            } else if (col < -1) {
+                fixedSink[row] -= value * fixedNow[-2 - col];
+            }
         }
     }
 
@@ -1310,8 +1384,19 @@ final class TransientSolver {
         }
     }
 
-    private static double v(double[] sol, int node) {
-        return node < 0 ? 0 : sol[node];
+    /** A node's voltage in a solution: ground 0, a fixed node its known voltage. */
+    private double v(double[] sol, int node) {
+        return node >= 0 ? sol[node] : node == -1 ? 0 : fixedNow[-2 - node];
+    }
+
+    /** The unknowns' part of {@link #v}: 0 for ground and fixed nodes (a vector over the unknowns only). */
+    private static double unknownPart(double[] vec, int node) {
+        return node < 0 ? 0 : vec[node];
+    }
+
+    /** The fixed nodes' part of {@link #v}: their known voltage, 0 for ground and unknowns. */
+    private double fixedPart(int node) {
+        return node < -1 ? fixedNow[-2 - node] : 0;
     }
 
     private static double[] unbox(List<Double> values) {

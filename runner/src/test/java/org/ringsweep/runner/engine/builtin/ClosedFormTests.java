@@ -169,6 +169,45 @@ class ClosedFormTests {
     }
 
     @Test
+    void nodesHeldByDcSourcesKeepTheirVoltageAndStackedSourcesAdd() {
+        // The engine solves a node held by a DC source to ground as known, not as an unknown
+        // (Netlist.eliminateFixedNodes); the results must be those of the circuit as drawn.
+        Waveforms w = Circuits.solve(Circuits.of(List.of(
+                new Primitive.DcVoltage("vcc", "vcc", "0", 3.3),
+                new Primitive.DcVoltage("vup", "top", "vcc", 1.2),
+                new Primitive.Resistor("rt", "top", "0", 1000),
+                new Primitive.Resistor("r1", "vcc", "mid", 1000),
+                new Primitive.Resistor("r2", "mid", "0", 2000),
+                Circuits.step("vs", "src", 1e-9, 0.5e-9, 1),
+                new Primitive.Resistor("rs", "src", "mid", 1000)),
+                new Transient(10e-12, 5e-9, 10e-12), "vcc", "top", "mid"));
+        for (int i = 0; i < w.size(); i++) {
+            assertEquals(3.3, w.value("vcc", i), 1e-12, "the rail itself");
+            assertEquals(4.5, w.value("top", i), 1e-9, "Kirchhoff's voltage law: 3.3 V + 1.2 V");
+        }
+        // Millman's theorem (textbook nodal analysis), with the source at 0 V before its step and 1 V after it.
+        assertEquals((3.3 / 1000) / (1 / 1000.0 + 1 / 2000.0 + 1 / 1000.0), w.value("mid", 0), 1e-9);
+        assertEquals((3.3 / 1000 + 1.0 / 1000) / (1 / 1000.0 + 1 / 2000.0 + 1 / 1000.0), w.value("mid", w.size() - 1), 1e-9);
+    }
+
+    @Test
+    void aTableControlledByARailFollowsItsScaleExactly() {
+        // A table current i = s(t)·(V(vcc) − V(out))/100 Ω from the rail into `out`, loaded by
+        // 100 Ω: the divider gives V(out) = 3.3·s/(1 + s) at every time point. The scale moves at
+        // every step, so the solver's low-rank table update runs with its controlling node fixed.
+        Waveforms w = Circuits.solve(Circuits.of(List.of(
+                new Primitive.DcVoltage("vcc", "vcc", "0", 3.3),
+                new Primitive.TableCurrent("ipu", "vcc", "out", "vcc", "out", new double[] {-10, 10}, new double[] {-0.1, 0.1},
+                        new double[] {1e-9, 2e-9}, new double[] {0, 1}),
+                new Primitive.Resistor("rl", "out", "0", 100)),
+                new Transient(10e-12, 3e-9, 10e-12), "out"));
+        for (int i = 0; i < w.size(); i++) {
+            double s = Math.max(0, Math.min(1, (w.time(i) - 1e-9) / 1e-9));
+            assertEquals(3.3 * s / (1 + s), w.value("out", i), 1e-9, "at t = " + w.time(i));
+        }
+    }
+
+    @Test
     void timeAxisIsStrictlyIncreasingAndEndsAtTheStopTime() {
         Waveforms w = Circuits.solve(Circuits.of(List.of(
                 Circuits.step("vs", "src", 0.333e-9, 0.1e-9, 1),
