@@ -33,14 +33,17 @@ import org.ringsweep.runner.engine.FailureKind;
  *     stretched to it.</li>
  * <li>Step control: after each trapezoidal step the local truncation error is estimated from
  *     the difference to the quadratic through the last three points (Milne's device); above
- *     {@value #LTE_RELATIVE} of the largest source voltage the step is redone at half the size
- *     (down to h/2^{@value #MAX_HALVINGS}), and it doubles back while the estimate stays under a
- *     tenth of that. When the analysis's step is the elaborator's automatic one
- *     ({@link Transient#stepAuto()}), the step may also double beyond h in the same way (not
+ *     {@value #LTE_RELATIVE} of the largest source voltage the step is redone smaller, and after
+ *     an accepted step the next one grows while the estimate allows. The new step is the usual
+ *     {@code h·0.9·(tolerance/estimate)^(1/3)} (the error grows as h³), rounded down to a level of
+ *     {@code h·2^(−k/4)}: quarter octaves, so that few distinct steps occur and their
+ *     factorisations can be kept; at most one octave up per step, down to h/2^{@value #MAX_HALVINGS}.
+ *     When the analysis's step is the elaborator's automatic one
+ *     ({@link Transient#stepAuto()}), the step may also grow beyond h in the same way (not
  *     within {@value #CALM_STEPS} steps of a rejection, and back to h at a sharp corner), up to
  *     the ceiling of {@code stepCeiling}: the elaborator's rule is a resolution rule for
  *     ngspice, while this engine's own error control guards the accuracy; a user's explicit step
- *     is honoured as the largest step. The last {@value #FACTOR_CACHE} factorisations are kept
+ *     is honoured as the largest step. The last {@value #FACTOR_CACHE} factorisations (fewer for a large matrix) are kept
  *     by rule, step and conductances, so switching between step sizes does not re-factor each time.</li>
  * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each sharp breakpoint (the
  *     slope changing by more than {@value #SHARP_CORNER} of itself: a ramp's start or end, not
@@ -122,8 +125,12 @@ final class TransientSolver {
      * factored in (see {@code solveWithTables}) instead of updated at every solve.
      */
     static final int REBASE_AFTER = 16;
+    /** Relative difference under which a step reuses a kept factorisation's step (see {@code snapToCached}). */
+    static final double STEP_SNAP = 1e-6;
     /** Factorisations kept for reuse (rules × step sizes). */
-    static final int FACTOR_CACHE = 6;
+    static final int FACTOR_CACHE = 24;
+    /** The kept factorisations hold at most about this many matrix entries in all (16 MB), and at least 6 are kept. */
+    static final int FACTOR_CACHE_ENTRIES = 1 << 21;
     /**
      * Local truncation error allowed per trapezoidal step, relative to the largest source voltage:
      * a step whose estimate exceeds it is redone at half the step, and the step doubles back
@@ -147,6 +154,16 @@ final class TransientSolver {
     static final double BREAK_STRETCH = 1.3;
     /** The smallest step is the largest one over 2^this. */
     static final int MAX_HALVINGS = 5;
+    /** Step levels per octave: the step is the base step times 2^(−level/LEVELS_PER_OCTAVE). */
+    static final int LEVELS_PER_OCTAVE = 4;
+    /** The growth factor of each level, 2^(i/4) for i = 0 … 4·max(halvings, doublings). */
+    private static final double[] LEVEL_FACTOR = new double[LEVELS_PER_OCTAVE * Math.max(MAX_HALVINGS, MAX_DOUBLINGS) + 1];
+
+    static {
+        for (int i = 0; i < LEVEL_FACTOR.length; i++) {
+            LEVEL_FACTOR[i] = Math.pow(2, (double) i / LEVELS_PER_OCTAVE);
+        }
+    }
     /** How many steps between two looks at the wall clock. */
     private static final int CLOCK_EVERY = 64;
 
@@ -230,17 +247,19 @@ final class TransientSolver {
     /** Where the assembly under way puts the currents of its entries in fixed nodes' columns (see {@link #add}). */
     private double[] fixedSink;
     /** Per cache entry: the known currents of the fixed nodes with that factorisation's conductances. */
-    private final double[][] luFixed = new double[FACTOR_CACHE][];
+    private final double[][] luFixed;
     /**
      * The last few factorisations, each for a rule, a step and a generation of the conductances
      * that do not depend on the step (timed resistors, linearised diodes and tables): a solve
      * switching between a few step sizes factors each once while those stay the same.
      */
-    private final DenseLu[] lus = new DenseLu[FACTOR_CACHE];
-    private final Rule[] luRule = new Rule[FACTOR_CACHE];
-    private final double[] luH = new double[FACTOR_CACHE];
-    private final long[] luGeneration = new long[FACTOR_CACHE];
-    private final long[] luUsed = new long[FACTOR_CACHE];
+    private final DenseLu[] lus;
+    /** How many factorisations are kept: {@value #FACTOR_CACHE}, fewer for a large matrix. */
+    private final int cacheSize;
+    private final Rule[] luRule;
+    private final double[] luH;
+    private final long[] luGeneration;
+    private final long[] luUsed;
     private DenseLu lu;
     /** The cache entry {@link #lu} is. */
     private int luIndex;
@@ -249,9 +268,9 @@ final class TransientSolver {
      * {@code Z = A⁻¹·U}, column j = the solution for table j's unit current pair (n values per
      * table), for the low-rank update of {@link #solveWithTables}.
      */
-    private final double[][] luTabG = new double[FACTOR_CACHE][];
-    private final double[][] luZ = new double[FACTOR_CACHE][];
-    private final boolean[][] luZReady = new boolean[FACTOR_CACHE][];
+    private final double[][] luTabG;
+    private final double[][] luZ;
+    private final boolean[][] luZReady;
     /** Scratch of the low-rank update: the small k × k system and its right-hand side. */
     private final double[] woodM;
     private final double[] woodR;
@@ -350,7 +369,17 @@ final class TransientSolver {
             trTable[k] = new PwlTable(tresEl[k].times(), tresEl[k].ohms());
         }
         factoredTrG = new double[tres.length];
-        for (int i = 0; i < FACTOR_CACHE; i++) {
+        cacheSize = (int) Math.max(6, Math.min(FACTOR_CACHE, FACTOR_CACHE_ENTRIES / ((long) size * size + 1)));
+        lus = new DenseLu[cacheSize];
+        luRule = new Rule[cacheSize];
+        luH = new double[cacheSize];
+        luGeneration = new long[cacheSize];
+        luUsed = new long[cacheSize];
+        luFixed = new double[cacheSize][];
+        luTabG = new double[cacheSize][];
+        luZ = new double[cacheSize][];
+        luZReady = new boolean[cacheSize][];
+        for (int i = 0; i < cacheSize; i++) {
             luTabG[i] = new double[tab.length];
             luZ[i] = new double[tab.length * size];
             luZReady[i] = new boolean[tab.length];
@@ -364,7 +393,7 @@ final class TransientSolver {
         matrix = new double[size * size];
         fixedVolts = unbox(net.fixedVolts);
         fixedNow = fixedVolts.clone();
-        for (int i = 0; i < FACTOR_CACHE; i++) {
+        for (int i = 0; i < cacheSize; i++) {
             luFixed[i] = new double[size];
         }
         Arrays.fill(luGeneration, -1);
@@ -488,10 +517,10 @@ final class TransientSolver {
         ceiling = stepCeiling(h);
         stretchable = analysis.stepAuto();
         lowest = 0;
-        while (lowest > -MAX_DOUBLINGS && h * (1L << -lowest) < ceiling) {
+        while (lowest > -LEVELS_PER_OCTAVE * MAX_DOUBLINGS && h * LEVEL_FACTOR[-lowest] < ceiling) {
             lowest--;
         }
-        halvings = 0;
+        level = 0;
         calm = 0;
         this.breaks = breaks;
         this.stop = stop;
@@ -538,11 +567,11 @@ final class TransientSolver {
     /** Whether a step may be stretched onto a breakpoint beyond 1 % (only with the engine's own step choice). */
     private boolean stretchable;
     /**
-     * The step is baseStep·2^−halvings: positive values halve it for the truncation error,
-     * negative ones (only when the step is the engine's own choice) double it up to the ceiling,
-     * down to {@code lowest}.
+     * The step is baseStep·2^(−level/{@value #LEVELS_PER_OCTAVE}): positive levels shorten it for
+     * the truncation error, negative ones (only when the step is the engine's own choice) lengthen
+     * it up to the ceiling, down to {@code lowest}.
      */
-    private int halvings;
+    private int level;
     private int lowest;
     /** Accepted steps since the last rejection. */
     private int calm;
@@ -566,7 +595,7 @@ final class TransientSolver {
             next++;
         }
         double bp = breaks[next];
-        double hTry = halvings >= 0 ? h / (1 << halvings) : Math.min(ceiling, h * (1L << -halvings));
+        double hTry = level >= 0 ? h / LEVEL_FACTOR[level] : Math.min(ceiling, h * LEVEL_FACTOR[-level]);
         // The step is hTry itself, not (t + hTry) − t, which differs from it in the last bits and
         // would miss the factorisation cached for hTry.
         double dt = hTry;
@@ -580,23 +609,27 @@ final class TransientSolver {
             corner = sharp[next];
         }
         Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
+        dt = snapToCached(dt, rule);
         System.arraycopy(x, 0, saved, 0, size);
         solvePoint(rule, dt, tn);
         double ratio = rule == Rule.TRAPEZOID && smooth >= 3 ? truncationError(saved, t, back1, t1, back2, t2, tn) / lteTol : 0;
-        if (ratio > 1 && halvings < MAX_HALVINGS) {
-            // Redo the step at half the size: nothing of it was accepted (the state moves only in accept).
+        int highest = LEVELS_PER_OCTAVE * MAX_HALVINGS;
+        if (ratio > 1 && level < highest) {
+            // Redo the step smaller: nothing of it was accepted (the state moves only in accept).
             System.arraycopy(saved, 0, x, 0, size);
-            halvings++;
+            level = Math.min(highest, level + Math.max(1, -levelsFor(ratio)));
             rejected++;
             calm = 0;
             return;
         }
         calm++;
-        if (ratio < 0.1 && halvings > lowest && !corner && (halvings > 0 || smooth >= 3 && calm > CALM_STEPS)) {
-            halvings--; // the error grows as h³: a doubled step stays under the tolerance
-        }
         if (corner) {
-            halvings = Math.max(halvings, 0); // the damped steps after a sharp corner: not beyond the base step
+            level = Math.max(level, 0); // the damped steps after a sharp corner: not beyond the base step
+        } else if (ratio < 1) {
+            int grown = level - Math.min(LEVELS_PER_OCTAVE, levelsFor(ratio));
+            // Back towards the base step at once; beyond it only on a smooth stretch, not just after a rejection.
+            int floor = smooth >= 3 && calm > CALM_STEPS ? lowest : Math.min(level, 0);
+            level = Math.max(Math.min(level, grown), floor);
         }
         accept(rule, dt, tn);
         double[] spareBack = back2;
@@ -646,6 +679,31 @@ final class TransientSolver {
         if (!newton(rule, dt, tn, 1.0)) {
             throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
                     + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
+        }
+    }
+
+    /**
+     * Levels (quarter octaves) by which the step may change after a step whose truncation error
+     * was {@code ratio} times the tolerance: the largest k with 2^(k/4) ≤ 0.9·ratio^(−1/3)
+     * (negative when the step must shrink), at most one octave up for a negligible error.
+     */
+    static int levelsFor(double ratio) {
+        // 2^(k/4) ≤ 0.9·ratio^(−1/3)  ⇔  ratio ≤ 0.729·2^(−3k/4): compared against a table, not
+        // computed with cbrt and log at every step.
+        int k = LEVELS_PER_OCTAVE;
+        while (k > -LEVELS_PER_OCTAVE * MAX_HALVINGS && !(ratio <= LEVEL_RATIO[k + LEVELS_PER_OCTAVE * MAX_HALVINGS])) {
+            k--;
+        }
+        return k;
+    }
+
+    /** LEVEL_RATIO[k + 4·MAX_HALVINGS] = 0.729·2^(−3k/4): the largest error ratio that allows a change of k levels. */
+    private static final double[] LEVEL_RATIO = new double[LEVELS_PER_OCTAVE * (MAX_HALVINGS + 1) + 1];
+
+    static {
+        for (int i = 0; i < LEVEL_RATIO.length; i++) {
+            int k = i - LEVELS_PER_OCTAVE * MAX_HALVINGS;
+            LEVEL_RATIO[i] = 0.729 * Math.pow(2, -3.0 * k / LEVELS_PER_OCTAVE);
         }
     }
 
@@ -890,6 +948,22 @@ final class TransientSolver {
         return false;
     }
 
+    /**
+     * A step within {@value #STEP_SNAP} (relative) of one whose factorisation is kept for this
+     * rule becomes that one: the steps onto evenly spaced breakpoints differ only by the rounding
+     * of the times, and each would otherwise be factored anew (and evict a useful entry). The
+     * companion models then use a step that differs from the time axis by that much, far below
+     * the truncation-error tolerance.
+     */
+    private double snapToCached(double dt, Rule rule) {
+        for (int i = 0; i < cacheSize; i++) {
+            if (luRule[i] == rule && luH[i] != dt && Math.abs(luH[i] - dt) <= STEP_SNAP * dt) {
+                return luH[i];
+            }
+        }
+        return dt;
+    }
+
     /** Makes {@link #lu} the factorisation of the transient matrix for this rule and step, from the cache or new. */
     private void factorFor(Rule rule, double h, double t) {
         if (nonlinearChanged || !Arrays.equals(trG, factoredTrG)) {
@@ -897,7 +971,7 @@ final class TransientSolver {
             System.arraycopy(trG, 0, factoredTrG, 0, trG.length);
         }
         int oldest = 0;
-        for (int i = 0; i < FACTOR_CACHE; i++) {
+        for (int i = 0; i < cacheSize; i++) {
             if (luGeneration[i] == generation && luRule[i] == rule && luH[i] == h) {
                 luUsed[i] = ++uses;
                 lu = lus[i];

@@ -61,4 +61,17 @@ class StepControlTests {
             assertEquals(far[n], Circuits.at(w, "far", t), 0.002 * 3.3, "far end on plateau " + n);
         }
     }
+
+    @Test
+    void theNextStepFollowsTheCubeRootRuleInQuarterOctaves() {
+        // Error-controlled step selection h_new = h·0.9·(tol/err)^(1/(p+1)), p = 2 for the trapezoidal
+        // rule (Hairer, Nørsett & Wanner, Solving ODEs I, §II.4; from memory), rounded down to
+        // quarter octaves and capped at one octave up.
+        for (double ratio : new double[] {1e-6, 0.01, 0.1, 0.2, 0.3, 0.43, 0.5, 0.729, 0.9, 1.0, 1.44, 3, 8, 100}) {
+            double factor = 0.9 * Math.cbrt(1 / ratio);
+            int expected = (int) Math.min(4, Math.floor(4 * Math.log(factor) / Math.log(2) + 1e-12));
+            assertEquals(expected, TransientSolver.levelsFor(ratio), "ratio " + ratio);
+        }
+        assertEquals(4, TransientSolver.levelsFor(0), "no error estimate: one octave up");
+    }
 }
