@@ -45,11 +45,16 @@ public final class EngineBenchmark {
     private static final int BUILTIN_RUNS = 21;
     private static final int BUILTIN_WARM_UP = 100;
     /**
-     * The built-in engine's warm-up also lasts at least this long (s): a net whose solve takes
-     * about a millisecond (the IBIS net) is not yet compiled by the JIT after 100 runs on a
-     * busy two-core machine, and its figure would be the interpreter's, not a sweep's.
+     * The built-in engine's warm-up runs in batches of this length (s) until two batches in a row
+     * are no faster than the best before them: a net whose solve takes paths the nets before it did not (the
+     * IBIS net's tables) makes the JIT recompile, which on a busy two-core machine took more than
+     * 2 s, and its figure would be that of the recompilation, not the steady state of a sweep.
      */
-    private static final double BUILTIN_WARM_UP_SECONDS = 1.5;
+    private static final double BUILTIN_WARM_UP_BATCH_SECONDS = 0.5;
+    /** Warm-up batches: at least this many … */
+    private static final int BUILTIN_WARM_UP_MIN_BATCHES = 6;
+    /** … and at most this many. */
+    private static final int BUILTIN_WARM_UP_MAX_BATCHES = 30;
     private static final String SWEEP_NET = "sync-terminated.yaml";
     private static final String SWEEP_PART = "R20";
 
@@ -104,10 +109,7 @@ public final class EngineBenchmark {
             int index = 0;
             for (Path file : nets) {
                 Circuit c = elaborator.elaborate(loader.load(file), "typ").circuit();
-                long warmUntil = System.nanoTime() + (long) (BUILTIN_WARM_UP_SECONDS * 1e9);
-                for (int i = 0; i < BUILTIN_WARM_UP || System.nanoTime() < warmUntil; i++) {
-                    builtin.solve(c, Duration.ofMinutes(1)); // JIT warm-up, as the many points of a sweep give
-                }
+                warmUp(() -> builtin.solve(c, Duration.ofMinutes(1))); // as the many points of a sweep give
                 double tb = medianSeconds(BUILTIN_RUNS, () -> require(builtin.solve(c, Duration.ofMinutes(1)), file));
                 Path dir = workDir.resolve("net" + index++);
                 double tn = medianSeconds(NGSPICE_RUNS, () -> require(ng.run(job(c, dir)), file));
@@ -171,6 +173,34 @@ public final class EngineBenchmark {
     private static void require(SimulationOutcome o, Path file) {
         if (o instanceof SimulationOutcome.Failure f) {
             throw new IllegalStateException(file.getFileName() + ": " + f.kind() + " " + f.message());
+        }
+    }
+
+    /**
+     * JIT warm-up: at least {@value #BUILTIN_WARM_UP} runs, then batches of
+     * {@value #BUILTIN_WARM_UP_BATCH_SECONDS} s until two in a row are not 3 % faster per run than
+     * the best before them (after at least {@value #BUILTIN_WARM_UP_MIN_BATCHES}, at most {@value #BUILTIN_WARM_UP_MAX_BATCHES}).
+     */
+    private static void warmUp(Runnable r) {
+        for (int i = 0; i < BUILTIN_WARM_UP; i++) {
+            r.run();
+        }
+        double best = Double.POSITIVE_INFINITY;
+        int flat = 0;
+        for (int batch = 0; batch < BUILTIN_WARM_UP_MAX_BATCHES; batch++) {
+            long t0 = System.nanoTime();
+            long end = t0 + (long) (BUILTIN_WARM_UP_BATCH_SECONDS * 1e9);
+            int n = 0;
+            while (System.nanoTime() < end) {
+                r.run();
+                n++;
+            }
+            double perRun = (System.nanoTime() - t0) / (double) n;
+            flat = perRun > 0.97 * best ? flat + 1 : 0;
+            if (batch + 1 >= BUILTIN_WARM_UP_MIN_BATCHES && flat >= 2) {
+                return;
+            }
+            best = Math.min(best, perRun);
         }
     }
 

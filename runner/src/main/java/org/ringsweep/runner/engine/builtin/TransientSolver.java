@@ -970,6 +970,10 @@ final class TransientSolver {
             generation++;
             System.arraycopy(trG, 0, factoredTrG, 0, trG.length);
         }
+        if (lu != null && luGeneration[luIndex] == generation && luRule[luIndex] == rule && luH[luIndex] == h) {
+            luUsed[luIndex] = ++uses; // the common case: the same factorisation as the last solve
+            return;
+        }
         int oldest = 0;
         for (int i = 0; i < cacheSize; i++) {
             if (luGeneration[i] == generation && luRule[i] == rule && luH[i] == h) {
@@ -1393,8 +1397,12 @@ final class TransientSolver {
         }
         for (int k = 0; k < tab.length; k++) {
             double vc = v(sol, tab[k][2]) - v(sol, tab[k][3]);
+            int seg = tabIterSeg[k];
+            if (vc >= tabY[k].lower(seg) && vc <= tabY[k].upper(seg)) {
+                continue; // on the segment it was linearised on: the piecewise-linear table is its linearisation there
+            }
             double linear = tabG[k] * vc + tabIeq[k];
-            double exact = tabS[k] * tabY[k].value(vc, tabY[k].segmentOf(vc, tabIterSeg[k]));
+            double exact = tabS[k] * tabY[k].value(vc, tabY[k].segmentOf(vc, seg));
             if (!(Math.abs(exact - linear) <= RELTOL * Math.max(Math.abs(exact), Math.abs(linear)) + ABSTOL)) {
                 return false;
             }
