@@ -45,6 +45,11 @@ import org.ringsweep.runner.engine.FailureKind;
  *     ngspice, while this engine's own error control guards the accuracy; a user's explicit step
  *     is honoured as the largest step. The last {@value #FACTOR_CACHE} factorisations (fewer for a large matrix) are kept
  *     by rule, step and conductances, so switching between step sizes does not re-factor each time.</li>
+ * <li>At rest (no node moving by more than {@value #REST_FRACTION} of the tolerance per step for
+ *     a whole longest line delay) and with every source, timed resistor and table scale constant
+ *     until the next breakpoint, one step goes towards that breakpoint, beyond the line bound (the
+ *     lines' histories are flat), as far as the last drift allows ({@code noteRest}); only with
+ *     the engine's own step choice.</li>
  * <li>{@value #DAMPED_STEPS} backward-Euler steps at t = 0 and after each sharp breakpoint (the
  *     slope changing by more than {@value #SHARP_CORNER} of itself: a ramp's start or end, not
  *     the points of a finely sampled curve) damp the trapezoidal rule's numerical ringing at a
@@ -137,6 +142,8 @@ final class TransientSolver {
      * (never beyond the largest step) when the estimate falls under a tenth of it.
      */
     static final double LTE_RELATIVE = 2e-4;
+    /** A step moving no node by more than this fraction of the truncation-error tolerance is at rest (see noteRest). */
+    static final double REST_FRACTION = 0.01;
     /** Fewest steps across the shortest transition of a source (a ramp) when the step grows. */
     static final double EDGE_POINTS = 10;
     /**
@@ -516,6 +523,11 @@ final class TransientSolver {
         baseStep = h;
         ceiling = stepCeiling(h);
         stretchable = analysis.stepAuto();
+        quietSpan = 0;
+        for (double td : lineTd) {
+            quietSpan = Math.max(quietSpan, td);
+        }
+        quietSpan = Math.max(quietSpan, 4 * h); // and a few steps, so that the rest is not one step's coincidence
         lowest = 0;
         while (lowest > -LEVELS_PER_OCTAVE * MAX_DOUBLINGS && h * LEVEL_FACTOR[-lowest] < ceiling) {
             lowest--;
@@ -564,6 +576,12 @@ final class TransientSolver {
     private int smooth;
     private double baseStep;
     private double ceiling;
+    /** Start of the present stretch of rest (see noteRest), NaN when not at rest. */
+    private double quietSince = Double.NaN;
+    /** How long the solution must have been at rest before a step towards the next breakpoint: the longest line delay (s). */
+    private double quietSpan;
+    /** The longest such step the last step's drift allows (s). */
+    private double quietJump;
     /** Whether a step may be stretched onto a breakpoint beyond 1 % (only with the engine's own step choice). */
     private boolean stretchable;
     /**
@@ -598,6 +616,12 @@ final class TransientSolver {
         double hTry = level >= 0 ? h / LEVEL_FACTOR[level] : Math.min(ceiling, h * LEVEL_FACTOR[-level]);
         // The step is hTry itself, not (t + hTry) − t, which differs from it in the last bits and
         // would miss the factorisation cached for hTry.
+        boolean jump = false;
+        if (stretchable && t - quietSince >= quietSpan && bp - t > hTry && inputsConstant(t, bp)) {
+            // At rest, with nothing changing before the next breakpoint: one step towards it (see quietJump).
+            hTry = Math.max(hTry, Math.min(bp - t, quietJump));
+            jump = true;
+        }
         double dt = hTry;
         double tn = t + hTry;
         boolean corner = false;
@@ -617,7 +641,10 @@ final class TransientSolver {
         if (ratio > 1 && level < highest) {
             // Redo the step smaller: nothing of it was accepted (the state moves only in accept).
             System.arraycopy(saved, 0, x, 0, size);
-            level = Math.min(highest, level + Math.max(1, -levelsFor(ratio)));
+            if (!jump) {
+                level = Math.min(highest, level + Math.max(1, -levelsFor(ratio)));
+            }
+            quietSince = Double.NaN; // not at rest after all: ordinary steps until it is again
             rejected++;
             calm = 0;
             return;
@@ -631,6 +658,7 @@ final class TransientSolver {
             int floor = smooth >= 3 && calm > CALM_STEPS ? lowest : Math.min(level, 0);
             level = Math.max(Math.min(level, grown), floor);
         }
+        noteRest(corner, t, tn);
         accept(rule, dt, tn);
         double[] spareBack = back2;
         back2 = back1;
@@ -680,6 +708,57 @@ final class TransientSolver {
             throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
                     + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
         }
+    }
+
+    /**
+     * Keeps track of rest: a step over which no node moved by more than
+     * {@value #REST_FRACTION} of the truncation-error tolerance continues a stretch of rest (or
+     * starts one at its beginning); any other step, or a sharp corner, ends it. At rest for a
+     * whole longest line delay, every line's history is flat too, and {@code advance} may take
+     * one step towards the next breakpoint when no source, timed resistor or table scale changes
+     * before it: the solution then stays where it is, and the step is bounded so that the drift
+     * seen in the last step, carried over it, stays under a tenth of the tolerance
+     * ({@code quietJump}). The truncation-error check still judges that step; a rejection ends the rest.
+     */
+    private void noteRest(boolean corner, double t, double tn) {
+        double moved = 0;
+        for (int i = 0; i < nodes; i++) {
+            moved = Math.max(moved, Math.abs(x[i] - saved[i]));
+        }
+        if (corner || moved > REST_FRACTION * lteTol) {
+            quietSince = Double.NaN;
+            return;
+        }
+        if (Double.isNaN(quietSince)) {
+            quietSince = t;
+        }
+        double drift = moved / (tn - t);
+        quietJump = drift > 0 ? 0.1 * lteTol / drift : Double.POSITIVE_INFINITY;
+    }
+
+    /** Whether every PWL source, timed resistor and table scale holds its value from t to the breakpoint bp (they are linear in between). */
+    private boolean inputsConstant(double t, double bp) {
+        double mid = 0.5 * (t + bp);
+        for (PwlTable p : srcPwl) {
+            if (p != null && valueAt(p, mid) != valueAt(p, t)) {
+                return false;
+            }
+        }
+        for (PwlTable p : trTable) {
+            if (valueAt(p, mid) != valueAt(p, t)) {
+                return false;
+            }
+        }
+        for (PwlTable p : tabK) {
+            if (p != null && valueAt(p, mid) != valueAt(p, t)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static double valueAt(PwlTable p, double t) {
+        return p.value(t, p.segmentOf(t, 0));
     }
 
     /**

@@ -74,4 +74,28 @@ class StepControlTests {
         }
         assertEquals(4, TransientSolver.levelsFor(0), "no error estimate: one octave up");
     }
+
+    @Test
+    void atRestTheStepReachesPastTheLineDelayAndTheValueStays() {
+        // Worked example 1 again, run long: the reflection coefficient at the source is
+        // (15 − 50)/(15 + 50) = −0.54 per round trip (lines-and-terminations.md §2), so after some
+        // 30 round trips the far end is within microvolts of 3.3 V and nothing changes any more.
+        Circuit c = Circuits.of(List.of(
+                Circuits.step("vs", "src", T0, RAMP, 3.3),
+                new Primitive.Resistor("rs", "src", "near", 15),
+                new Primitive.LosslessLine("t1", "near", "0", "far", "0", 50, TD),
+                new Primitive.Resistor("rl", "far", "0", 1e9)),
+                new Transient(STEP, 200e-9, STEP, true), "far");
+        Waveforms w = Circuits.solve(c);
+        // Ordinary steps stay under one line delay (the method of characteristics); at rest one step may go further.
+        assertTrue(largestStep(w) > 2 * TD, "largest step " + largestStep(w));
+        // DC: an open line passes the source voltage, less the 1 GΩ load's divider (15/(15 + 1e9) of it).
+        double dc = 3.3 * 1e9 / (1e9 + 15);
+        assertEquals(dc, w.value("far", w.size() - 1), 1e-4);
+        for (int i = 0; i < w.size(); i++) {
+            if (w.time(i) > 80e-9) {
+                assertEquals(dc, w.value("far", i), 1e-3, "at rest at t = " + w.time(i));
+            }
+        }
+    }
 }
