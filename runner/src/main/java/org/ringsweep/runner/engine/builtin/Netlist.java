@@ -1,6 +1,7 @@
 package org.ringsweep.runner.engine.builtin;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -123,7 +124,7 @@ final class Netlist {
      */
     private void eliminateFixedNodes(List<int[]> pendingBranch) {
         int[] map = new int[nodeNames.size()];
-        java.util.Arrays.fill(map, Integer.MIN_VALUE);
+        Arrays.fill(map, Integer.MIN_VALUE);
         for (int k = 0; k < sources.size(); k++) {
             int[] e = sources.get(k);
             if (sourceElements.get(k) instanceof Primitive.DcVoltage v && e[1] == -1 && e[0] >= 0
@@ -201,6 +202,11 @@ final class Netlist {
     }
 
     private boolean hasLossyLine;
+
+    /** Longest line (or line section) delay (s), or 0 without lines. */
+    double longestDelay() {
+        return lineDelay.stream().mapToDouble(Double::doubleValue).max().orElse(0);
+    }
 
     /** Shortest line (or line section) delay (s), or +∞ without lines. */
     double shortestDelay() {

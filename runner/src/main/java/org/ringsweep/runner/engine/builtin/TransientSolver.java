@@ -138,8 +138,8 @@ final class TransientSolver {
     static final int FACTOR_CACHE_ENTRIES = 1 << 21;
     /**
      * Local truncation error allowed per trapezoidal step, relative to the largest source voltage:
-     * a step whose estimate exceeds it is redone at half the step, and the step doubles back
-     * (never beyond the largest step) when the estimate falls under a tenth of it.
+     * a step whose estimate exceeds it is redone smaller, and the next step is chosen from the
+     * estimate by {@code levelsFor}.
      */
     static final double LTE_RELATIVE = 2e-4;
     /** A step moving no node by more than this fraction of the truncation-error tolerance is at rest (see noteRest). */
@@ -523,11 +523,7 @@ final class TransientSolver {
         baseStep = h;
         ceiling = stepCeiling(h);
         stretchable = analysis.stepAuto();
-        quietSpan = 0;
-        for (double td : lineTd) {
-            quietSpan = Math.max(quietSpan, td);
-        }
-        quietSpan = Math.max(quietSpan, 4 * h); // and a few steps, so that the rest is not one step's coincidence
+        quietSpan = Math.max(net.longestDelay(), 4 * h); // and a few steps, so that the rest is not one step's coincidence
         lowest = 0;
         while (lowest > -LEVELS_PER_OCTAVE * MAX_DOUBLINGS && h * LEVEL_FACTOR[-lowest] < ceiling) {
             lowest--;
@@ -614,14 +610,14 @@ final class TransientSolver {
         }
         double bp = breaks[next];
         double hTry = level >= 0 ? h / LEVEL_FACTOR[level] : Math.min(ceiling, h * LEVEL_FACTOR[-level]);
-        // The step is hTry itself, not (t + hTry) − t, which differs from it in the last bits and
-        // would miss the factorisation cached for hTry.
         boolean jump = false;
-        if (stretchable && t - quietSince >= quietSpan && bp - t > hTry && inputsConstant(t, bp)) {
+        if (stretchable && t - quietSince >= quietSpan && bp - t > hTry && flatBefore[next]) {
             // At rest, with nothing changing before the next breakpoint: one step towards it (see quietJump).
             hTry = Math.max(hTry, Math.min(bp - t, quietJump));
             jump = true;
         }
+        // The step is hTry itself, not (t + hTry) − t, which differs from it in the last bits and
+        // would miss the factorisation cached for hTry.
         double dt = hTry;
         double tn = t + hTry;
         boolean corner = false;
@@ -734,31 +730,6 @@ final class TransientSolver {
         }
         double drift = moved / (tn - t);
         quietJump = drift > 0 ? 0.1 * lteTol / drift : Double.POSITIVE_INFINITY;
-    }
-
-    /** Whether every PWL source, timed resistor and table scale holds its value from t to the breakpoint bp (they are linear in between). */
-    private boolean inputsConstant(double t, double bp) {
-        double mid = 0.5 * (t + bp);
-        for (PwlTable p : srcPwl) {
-            if (p != null && valueAt(p, mid) != valueAt(p, t)) {
-                return false;
-            }
-        }
-        for (PwlTable p : trTable) {
-            if (valueAt(p, mid) != valueAt(p, t)) {
-                return false;
-            }
-        }
-        for (PwlTable p : tabK) {
-            if (p != null && valueAt(p, mid) != valueAt(p, t)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private static double valueAt(PwlTable p, double t) {
-        return p.value(t, p.segmentOf(t, 0));
     }
 
     /**
@@ -880,11 +851,53 @@ final class TransientSolver {
         }
         out[n++] = stop;
         sharp = Arrays.copyOf(sharp, n);
-        return Arrays.copyOf(out, n);
+        out = Arrays.copyOf(out, n);
+        flatBefore = flatIntervals(out);
+        return out;
     }
 
     /** Whether each breakpoint restarts the damped steps (see {@link #corners}). */
     private boolean[] sharp;
+    /**
+     * Whether every PWL source, timed resistor and table scale holds its value over the interval
+     * that ends at each breakpoint (a step at rest may then go to it, see {@code noteRest}).
+     */
+    private boolean[] flatBefore;
+
+    /**
+     * Per breakpoint, whether every input (PWL source, timed resistor, table scale) is constant
+     * on the interval before it: each is linear between breakpoints (its corners are
+     * breakpoints), so its values at the interval's middle and end decide. Computed once per
+     * solve, the times increasing, so each table's segment search continues from the last.
+     */
+    private boolean[] flatIntervals(double[] breaks) {
+        List<PwlTable> inputs = new ArrayList<>();
+        for (PwlTable p : srcPwl) {
+            if (p != null) {
+                inputs.add(p);
+            }
+        }
+        inputs.addAll(Arrays.asList(trTable));
+        for (PwlTable p : tabK) {
+            if (p != null) {
+                inputs.add(p);
+            }
+        }
+        int[] hint = new int[inputs.size()];
+        boolean[] flat = new boolean[breaks.length];
+        for (int j = 0; j < breaks.length; j++) {
+            double mid = 0.5 * ((j == 0 ? 0 : breaks[j - 1]) + breaks[j]);
+            flat[j] = true;
+            for (int q = 0; q < inputs.size() && flat[j]; q++) {
+                PwlTable p = inputs.get(q);
+                hint[q] = p.segmentOf(mid, hint[q]);
+                double atMid = p.value(mid, hint[q]);
+                hint[q] = p.segmentOf(breaks[j], hint[q]);
+                flat[j] = atMid == p.value(breaks[j], hint[q]);
+            }
+        }
+        return flat;
+    }
 
     /**
      * Adds the corners of a function of time held outside its points, each as {time, 1 if sharp
