@@ -16,12 +16,12 @@ final class DenseLu {
     private final double[] lu;
     private final int[] perm;
     private final double[] scratch;
-    /** Row-compressed non-zeros of L (below the diagonal) and U (above it), and U's diagonal. */
+    /** Row-compressed non-zeros of L (below the diagonal) and U (above it), and the reciprocals of U's diagonal (a solve multiplies). */
     private final int[] lStart;
     private final int[] uStart;
     private int[] cols;
     private double[] vals;
-    private final double[] diag;
+    private final double[] inverseDiag;
 
     DenseLu(int n) {
         this.n = n;
@@ -32,7 +32,7 @@ final class DenseLu {
         this.uStart = new int[n + 1];
         this.cols = new int[4 * n];
         this.vals = new double[4 * n];
-        this.diag = new double[n];
+        this.inverseDiag = new double[n];
     }
 
     /**
@@ -114,7 +114,7 @@ final class DenseLu {
                     vals[k++] = lu[row + j];
                 }
             }
-            diag[i] = lu[row + i];
+            inverseDiag[i] = 1 / lu[row + i];
         }
         lStart[n] = k;
     }
@@ -136,7 +136,7 @@ final class DenseLu {
             for (int k = uStart[i], end = lStart[i + 1]; k < end; k++) {
                 s -= vals[k] * scratch[cols[k]];
             }
-            scratch[i] = s / diag[i];
+            scratch[i] = s * inverseDiag[i];
         }
         System.arraycopy(scratch, 0, b, 0, n);
     }

@@ -87,6 +87,11 @@ final class LineHistory {
         }
     }
 
+    /** The four values of the last point (v1, i1, v2, i2) into {@code out}. */
+    void last(double[] out) {
+        System.arraycopy(values, 4 * physical(size - 1), out, 0, 4);
+    }
+
     private int physical(int logical) {
         return (head + logical) & mask;
     }

@@ -26,11 +26,15 @@ import org.ringsweep.runner.engine.FailureKind;
  * <li>A lossless line is two Norton equivalents (method of characteristics, Bergeron):
  *     {@code i1(t) = v1(t)/Z0 − [v2(t−TD)/Z0 + i2(t−TD)]} and the same with the ports swapped,
  *     the delayed values interpolated linearly in the stored history: the delay is exact, not
- *     rounded to the step. At DC a line is a direct connection of its ports.</li>
+ *     rounded to the step. A step longer than the delay (the error control's choice on a line
+ *     shorter than the edges need) takes the waves that left the other port during the step as
+ *     linear over it, which makes the line a two-port over that step ({@code lineTheta}). At DC
+ *     a line is a direct connection of its ports.</li>
  * <li>Base step {@code h = min(maxStep, shortest delay / 2)}, so every delayed value lies
  *     at least one step in the accepted past; breakpoints (PWL corners, timed-resistor corners, table-scale corners,
  *     the stop time) are hit exactly, a step that would end within 1 % of a step before one is
- *     stretched to it.</li>
+ *     stretched to it. With the engine's own step choice only the sharp corners and the stop
+ *     time are hit: the corners of a sampled smooth curve are integrated through ({@code hitFrom}).</li>
  * <li>Step control: after each trapezoidal step the local truncation error is estimated from
  *     the difference to the quadratic through the last three points (Milne's device); above
  *     {@value #LTE_RELATIVE} of the largest source voltage the step is redone smaller, and after
@@ -41,9 +45,15 @@ import org.ringsweep.runner.engine.FailureKind;
  *     When the analysis's step is the elaborator's automatic one
  *     ({@link Transient#stepAuto()}), the step may also grow beyond h in the same way (not
  *     within {@value #CALM_STEPS} steps of a rejection, and back to h at a sharp corner), up to
- *     the ceiling of {@code stepCeiling}: the elaborator's rule is a resolution rule for
+ *     the ceilings of {@code lineCeiling} and {@code edgeCeiling}: the elaborator's rule is a resolution rule for
  *     ngspice, while this engine's own error control guards the accuracy; a user's explicit step
- *     is honoured as the largest step. The last {@value #FACTOR_CACHE} factorisations (fewer for a large matrix) are kept
+ *     is honoured as the largest step. An edge keeps {@value #EDGE_POINTS} steps or more: while a
+ *     source changes the step stays under that fraction of its transition, and while none does
+ *     (an edge arriving through a line) a longer step that moves a node by more than that
+ *     fraction of the largest source voltage is redone at the edge ceiling; after the error
+ *     estimate rejects a step beyond the edge ceiling, {@value #EDGE_HOLD_STEPS} steps stay under it.
+ *     An IBIS table's first linearisation at a step is where its last two points say its
+ *     voltage is heading ({@code predictRatio}). The last {@value #FACTOR_CACHE} factorisations (fewer for a large matrix) are kept
  *     by rule, step and conductances, so switching between step sizes does not re-factor each time.</li>
  * <li>At rest (no node moving by more than {@value #REST_FRACTION} of the tolerance per step for
  *     a whole longest line delay) and with every source, timed resistor and table scale constant
@@ -120,11 +130,17 @@ final class TransientSolver {
      */
     static final double LINE_STEP = 0.5;
     /**
-     * The step the truncation-error control may grow to on a net of lossless lines only, as a
-     * fraction of the shortest delay: under one delay every delayed value still lies in the
-     * accepted past, also after a step is stretched by up to 1 % onto a breakpoint.
+     * The step the truncation-error control may grow to on a net of lossless lines only, in
+     * shortest delays: a step longer than a line's delay makes that line a two-port over the step
+     * ({@code lineTheta}); the error estimate, not this bound, limits the step on the demo nets.
+     * Kept under {@link #IMPLICIT_LINE_LIMIT}, also after a step is stretched by up to 1 % onto a breakpoint.
      */
-    static final double LOSSLESS_CEILING = 0.99;
+    static final double LOSSLESS_CEILING = 2;
+    /**
+     * The longest step, in line delays, that treats the line as a two-port over the step (see
+     * {@code lineTheta}); a longer one is only the step at rest, over a flat history.
+     */
+    static final double IMPLICIT_LINE_LIMIT = 3;
     /**
      * Solves in a row after which a table conductance that differs from the factored one is
      * factored in (see {@code solveWithTables}) instead of updated at every solve.
@@ -146,6 +162,8 @@ final class TransientSolver {
     static final double REST_FRACTION = 0.01;
     /** Fewest steps across the shortest transition of a source (a ramp) when the step grows. */
     static final double EDGE_POINTS = 10;
+    /** Steps held at the edge ceiling after a longer step was rejected for its truncation error (see {@code edgeHold}). */
+    static final int EDGE_HOLD_STEPS = 32;
     /**
      * Steps accepted after a rejection before the step may grow beyond the base step again: a
      * step that has just met an edge would otherwise double into it and be redone.
@@ -342,6 +360,7 @@ final class TransientSolver {
         dioQ = new double[dio.length];
         dioIc = new double[dio.length];
         tabV = new double[tab.length];
+        tabVBefore = new double[tab.length];
         tabSeg = new int[tab.length];
         tabIter = new double[tab.length];
         tabIterSeg = new int[tab.length];
@@ -420,18 +439,33 @@ final class TransientSolver {
      * the elaborator's resolution rule for ngspice (a fraction of the shortest ramp and of every
      * long line's delay), which this engine's own error control need not keep in the flat
      * stretches between edges: the step may double up to {@value #MAX_DOUBLINGS} times, but stays
-     * under the line bound of the method of characteristics ({@value #LOSSLESS_CEILING} of the
-     * shortest delay, {@value #LINE_STEP} of it with lossy-line sections) and under
-     * 1/{@value #EDGE_POINTS} of the shortest transition of any source, timed resistor or table
-     * scale, so an edge keeps a resolution of its own whatever the error estimate says.
+     * under the line bound ({@value #LOSSLESS_CEILING} shortest delays on a net of lossless lines,
+     * a step longer than a delay treating that line as a two-port over the step, see
+     * {@code lineTheta}; {@value #LINE_STEP} of the shortest delay with lossy-line sections).
      *
      * @param base the base step (s)
      */
-    private double stepCeiling(double base) {
+    private double lineCeiling(double base) {
         if (!analysis.stepAuto()) {
             return base;
         }
         double lineBound = (net.hasLossyLine() ? LINE_STEP : LOSSLESS_CEILING) * net.shortestDelay();
+        return Math.max(base, Math.min(lineBound, base * (1L << MAX_DOUBLINGS)));
+    }
+
+    /**
+     * The largest step while a source, timed resistor or table scale is changing (s): the
+     * {@link #lineCeiling}, and at most 1/{@value #EDGE_POINTS} of the shortest transition of any
+     * of them, so that an edge keeps a resolution of its own whatever the error estimate says.
+     * Where every input is constant (an edge arriving through a line, a reflection) the same
+     * resolution is asked of the solution instead: a step longer than this that moves any node by
+     * more than 1/{@value #EDGE_POINTS} of the largest source voltage is redone at this length
+     * (see {@code advance}), so a full-swing edge keeps its ten steps and the ringing tail
+     * of a few per cent of the swing does not.
+     *
+     * @param base the base step (s)
+     */
+    private double edgeCeiling(double base) {
         double edge = Double.POSITIVE_INFINITY;
         for (Primitive p : srcEl) {
             if (p instanceof Primitive.PwlVoltage v) {
@@ -444,7 +478,7 @@ final class TransientSolver {
         for (Primitive.TableCurrent tc : net.tables) {
             edge = Math.min(edge, shortestTransition(tc.scaleTimes(), tc.scale()));
         }
-        return Math.max(base, Math.min(Math.min(lineBound, base * (1L << MAX_DOUBLINGS)), edge / EDGE_POINTS));
+        return Math.max(base, Math.min(lineCeiling(base), edge / EDGE_POINTS));
     }
 
     /**
@@ -521,7 +555,10 @@ final class TransientSolver {
         t2 = 0;
         smooth = 1;
         baseStep = h;
-        ceiling = stepCeiling(h);
+        edgeCeiling = edgeCeiling(h);
+        lineCeiling = lineCeiling(h);
+        ceiling = lineCeiling;
+        edgeMove = referenceVoltage() / EDGE_POINTS;
         stretchable = analysis.stepAuto();
         quietSpan = Math.max(net.longestDelay(), 4 * h); // and a few steps, so that the rest is not one step's coincidence
         lowest = 0;
@@ -572,6 +609,17 @@ final class TransientSolver {
     private int smooth;
     private double baseStep;
     private double ceiling;
+    /** The step ceilings while an input changes and while none does (see {@link #edgeCeiling}). */
+    private double edgeCeiling;
+    private double lineCeiling;
+    /** The most a step longer than the edge ceiling may move a node (V). */
+    private double edgeMove;
+    /**
+     * Steps to go at the edge ceiling after the truncation error rejected a longer step: where the
+     * error estimate keeps the step near the edge ceiling anyway (a ringing line), growing
+     * beyond it would only be redone.
+     */
+    private int edgeHold;
     /** Start of the present stretch of rest (see noteRest), NaN when not at rest. */
     private double quietSince = Double.NaN;
     /** How long the solution must have been at rest before a step towards the next breakpoint: the longest line delay (s). */
@@ -608,12 +656,14 @@ final class TransientSolver {
         while (breaks[next] <= t + tiny) {
             next++;
         }
-        double bp = breaks[next];
+        int target = stretchable ? hitFrom[next] : next;
+        double bp = breaks[target];
+        ceiling = flatBefore[next] && edgeHold == 0 ? lineCeiling : edgeCeiling;
         double hTry = level >= 0 ? h / LEVEL_FACTOR[level] : Math.min(ceiling, h * LEVEL_FACTOR[-level]);
         boolean jump = false;
-        if (stretchable && t - quietSince >= quietSpan && bp - t > hTry && flatBefore[next]) {
+        if (stretchable && t - quietSince >= quietSpan && breaks[next] - t > hTry && flatBefore[next]) {
             // At rest, with nothing changing before the next breakpoint: one step towards it (see quietJump).
-            hTry = Math.max(hTry, Math.min(bp - t, quietJump));
+            hTry = Math.max(hTry, Math.min(breaks[next] - t, quietJump));
             jump = true;
         }
         // The step is hTry itself, not (t + hTry) − t, which differs from it in the last bits and
@@ -626,17 +676,36 @@ final class TransientSolver {
             // step and a sliver; the truncation-error check still judges the longer step).
             tn = bp;
             dt = bp - t;
-            corner = sharp[next];
+            corner = sharp[target];
         }
         Rule rule = damped > 0 ? Rule.EULER : Rule.TRAPEZOID;
-        dt = snapToCached(dt, rule);
+        if (dt != hTry) {
+            dt = snapToCached(dt, rule); // a level's step is the cache's key exactly; only a step onto a breakpoint may be near one
+        }
         System.arraycopy(x, 0, saved, 0, size);
+        predictRatio = smooth >= 2 && lastStep > 0 ? dt / lastStep : 0;
         solvePoint(rule, dt, tn);
         double ratio = rule == Rule.TRAPEZOID && smooth >= 3 ? truncationError(saved, t, back1, t1, back2, t2, tn) / lteTol : 0;
         int highest = LEVELS_PER_OCTAVE * MAX_HALVINGS;
+        if (!jump && dt > edgeCeiling * (1 + STEP_SNAP) && movedBy() > edgeMove) {
+            // An edge arrived within a long step: redo it at the edge ceiling (see edgeCeiling).
+            System.arraycopy(saved, 0, x, 0, size);
+            int edgeLevel = Math.min(level, 0);
+            while (edgeLevel < 0 && h * LEVEL_FACTOR[-edgeLevel] > edgeCeiling) {
+                edgeLevel++;
+            }
+            level = Math.max(level + 1, edgeLevel);
+            quietSince = Double.NaN;
+            rejected++;
+            calm = 0;
+            return;
+        }
         if (ratio > 1 && level < highest) {
             // Redo the step smaller: nothing of it was accepted (the state moves only in accept).
             System.arraycopy(saved, 0, x, 0, size);
+            if (dt > edgeCeiling * (1 + STEP_SNAP)) {
+                edgeHold = EDGE_HOLD_STEPS;
+            }
             if (!jump) {
                 level = Math.min(highest, level + Math.max(1, -levelsFor(ratio)));
             }
@@ -646,6 +715,7 @@ final class TransientSolver {
             return;
         }
         calm++;
+        edgeHold = Math.max(0, edgeHold - 1);
         if (corner) {
             level = Math.max(level, 0); // the damped steps after a sharp corner: not beyond the base step
         } else if (ratio < 1) {
@@ -656,6 +726,7 @@ final class TransientSolver {
         }
         noteRest(corner, t, tn);
         accept(rule, dt, tn);
+        lastStep = dt;
         double[] spareBack = back2;
         back2 = back1;
         back1 = spareBack;
@@ -688,9 +759,20 @@ final class TransientSolver {
      */
     private void solvePoint(Rule rule, double dt, double tn) {
         for (int l = 0; l < line.length; l++) {
-            history[l].at(tn - lineTd[l], delayed);
-            lineIh[2 * l] = lineG[l] * delayed[2] + delayed[3];
-            lineIh[2 * l + 1] = lineG[l] * delayed[0] + delayed[1];
+            double theta = lineTheta(l, dt);
+            if (theta == 0) {
+                history[l].at(tn - lineTd[l], delayed);
+                lineIh[2 * l] = lineG[l] * delayed[2] + delayed[3];
+                lineIh[2 * l + 1] = lineG[l] * delayed[0] + delayed[1];
+            } else {
+                // The step is longer than the delay: the waves leaving each port at tn − TD lie inside
+                // the step, linear between the last accepted point and tn (see lineTheta).
+                history[l].last(delayed);
+                double a1 = delayed[0] + delayed[1] / lineG[l];
+                double a2 = delayed[2] + delayed[3] / lineG[l];
+                lineIh[2 * l] = lineG[l] * (a2 - theta * a1) / (1 + theta);
+                lineIh[2 * l + 1] = lineG[l] * (a1 - theta * a2) / (1 + theta);
+            }
         }
         for (int k = 0; k < tres.length; k++) {
             trSeg[k] = trTable[k].segmentOf(tn, trSeg[k]);
@@ -706,6 +788,15 @@ final class TransientSolver {
         }
     }
 
+    /** The largest change of a node voltage over the step being judged (V). */
+    private double movedBy() {
+        double moved = 0;
+        for (int i = 0; i < nodes; i++) {
+            moved = Math.max(moved, Math.abs(x[i] - saved[i]));
+        }
+        return moved;
+    }
+
     /**
      * Keeps track of rest: a step over which no node moved by more than
      * {@value #REST_FRACTION} of the truncation-error tolerance continues a stretch of rest (or
@@ -717,10 +808,7 @@ final class TransientSolver {
      * ({@code quietJump}). The truncation-error check still judges that step; a rejection ends the rest.
      */
     private void noteRest(boolean corner, double t, double tn) {
-        double moved = 0;
-        for (int i = 0; i < nodes; i++) {
-            moved = Math.max(moved, Math.abs(x[i] - saved[i]));
-        }
+        double moved = movedBy();
         if (corner || moved > REST_FRACTION * lteTol) {
             quietSince = Double.NaN;
             return;
@@ -853,6 +941,10 @@ final class TransientSolver {
         sharp = Arrays.copyOf(sharp, n);
         out = Arrays.copyOf(out, n);
         flatBefore = flatIntervals(out);
+        hitFrom = new int[n];
+        for (int j = n - 1; j >= 0; j--) {
+            hitFrom[j] = sharp[j] || j == n - 1 ? j : hitFrom[j + 1];
+        }
         return out;
     }
 
@@ -863,6 +955,13 @@ final class TransientSolver {
      * that ends at each breakpoint (a step at rest may then go to it, see {@code noteRest}).
      */
     private boolean[] flatBefore;
+    /**
+     * Per breakpoint, the first breakpoint from it on that a step must land on when the step is
+     * the engine's own choice: a sharp corner or the stop time. The corners of a sampled smooth
+     * curve (an IBIS waveform, every few tens of picoseconds) are integrated through, the error
+     * control judging each step, instead of each splitting a step in two.
+     */
+    private int[] hitFrom;
 
     /**
      * Per breakpoint, whether every input (PWL source, timed resistor, table scale) is constant
@@ -1284,8 +1383,10 @@ final class TransientSolver {
             double vc;
             int seg;
             if (iter == 0 && keepFactored) {
-                vc = tabV[k];
-                seg = tabSeg[k];
+                // Linearised where the last two points say the voltage is heading: on a steady
+                // slope it lands on that segment, and the first solve holds (see linearisationHolds).
+                vc = tabV[k] + (tabV[k] - tabVBefore[k]) * predictRatio;
+                seg = tabY[k].segmentOf(vc, tabSeg[k]);
             } else {
                 double proposed = v(sol, tab[k][2]) - v(sol, tab[k][3]);
                 seg = tabIterSeg[k];
@@ -1333,8 +1434,18 @@ final class TransientSolver {
         return i;
     }
 
+    /** Each table's controlling voltage at the accepted point before the last. */
+    private final double[] tabVBefore;
+    /**
+     * The step being solved over the last accepted one, by which a table's last change is
+     * carried forward for its first linearisation; 0 (no prediction) at the start and just after a sharp corner.
+     */
+    private double predictRatio;
+    private double lastStep;
+
     private void acceptTables() {
         for (int k = 0; k < tab.length; k++) {
+            tabVBefore[k] = tabV[k];
             tabV[k] = v(x, tab[k][2]) - v(x, tab[k][3]);
             tabSeg[k] = tabY[k].segmentOf(tabV[k], tabIterSeg[k]);
             tabIterSeg[k] = tabSeg[k];
@@ -1356,7 +1467,10 @@ final class TransientSolver {
             int[] n = line[l];
             double v1 = v(x, n[0]) - v(x, n[1]);
             double v2 = v(x, n[2]) - v(x, n[3]);
-            history[l].add(t, v1, lineG[l] * v1 - lineIh[2 * l], v2, lineG[l] * v2 - lineIh[2 * l + 1]);
+            double theta = lineTheta(l, h);
+            double self = lineG[l] * (1 + theta * theta) / (1 - theta * theta);
+            double mutual = -2 * lineG[l] * theta / (1 - theta * theta);
+            history[l].add(t, v1, self * v1 + mutual * v2 - lineIh[2 * l], v2, self * v2 + mutual * v1 - lineIh[2 * l + 1]);
         }
         for (int d = 0; d < dio.length; d++) {
             double vd = v(x, dio[d][0]) - v(x, dio[d][1]);
@@ -1413,8 +1527,15 @@ final class TransientSolver {
                 add(a, n, br, p[2], -1);
                 add(a, n, br, p[3], 1);
             } else {
-                conductance(a, n, p[0], p[1], lineG[l]);
-                conductance(a, n, p[2], p[3], lineG[l]);
+                double theta = lineTheta(l, h);
+                double self = lineG[l] * (1 + theta * theta) / (1 - theta * theta);
+                conductance(a, n, p[0], p[1], self);
+                conductance(a, n, p[2], p[3], self);
+                if (theta != 0) {
+                    double mutual = -2 * lineG[l] * theta / (1 - theta * theta);
+                    transconductance(a, n, p[0], p[1], p[2], p[3], mutual);
+                    transconductance(a, n, p[2], p[3], p[0], p[1], mutual);
+                }
             }
         }
     }
@@ -1524,6 +1645,29 @@ final class TransientSolver {
         add(a, n, j, j, g);
         add(a, n, i, j, -g);
         add(a, n, j, i, -g);
+    }
+
+    /** A current {@code g·(v(cp) − v(cm))} into the element at {@code p}, out of it at {@code m} (rows p, m). */
+    private void transconductance(double[] a, int n, int p, int m, int cp, int cm, double g) {
+        add(a, n, p, cp, g);
+        add(a, n, p, cm, -g);
+        add(a, n, m, cp, -g);
+        add(a, n, m, cm, g);
+    }
+
+    /**
+     * For a step {@code h} longer than line {@code l}'s delay TD (up to {@value #IMPLICIT_LINE_LIMIT} TD), the
+     * fraction θ = (h − TD)/h of the step at which the wave arriving at tn left the other port;
+     * 0 for a step within the delay (and for a longer one, which only a step at rest takes, over
+     * a flat history). With the outgoing waves {@code a = v + Z0·i} linear over the step,
+     * {@code v1 − Z0·i1 = (1 − θ)·a2(t) + θ·a2(tn)} and the same with the ports swapped; solved
+     * for the currents, the line is a two-port of self conductance {@code (1 + θ²)/(1 − θ²)/Z0},
+     * mutual conductance {@code −2θ/(1 − θ²)/Z0} and history currents
+     * {@code (a2(t) − θ·a1(t))/((1 + θ)·Z0)}; at θ = 0 the Bergeron model of the step within the delay.
+     */
+    private double lineTheta(int l, double h) {
+        double td = lineTd[l];
+        return h > td && h <= IMPLICIT_LINE_LIMIT * td ? (h - td) / h : 0;
     }
 
     /** A branch current {@code br} leaving node {@code p}, entering {@code m}, with {@code v(p) − v(m)} in row br. */

@@ -36,6 +36,11 @@ class LineHistoryTests {
             }
             t = next;
             h.add(t, f(0, t), f(1, t), f(2, t), f(3, t));
+            h.last(out);
+            for (int q = 0; q < 4; q++) {
+                // The last point, the one a step longer than the delay starts from, after any growth or drop.
+                assertEquals(f(q, t), out[q], 1e-12 * Math.max(1, Math.abs(f(q, t))), "last value " + q + " at " + t);
+            }
         }
     }
 

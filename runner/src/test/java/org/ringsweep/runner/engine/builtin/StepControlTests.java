@@ -49,16 +49,54 @@ class StepControlTests {
     void anAutomaticStepGrowsOnThePlateausAndKeepsTheBounceLevels() {
         Waveforms w = Circuits.solve(example1(true));
         double largest = largestStep(w);
-        // It grows (common practice for error-controlled steps), but stays under the line delay (the method
-        // of characteristics needs h ≤ TD) and under a tenth of the source ramp.
+        // It grows (common practice for error-controlled steps), but an edge keeps ten steps or more
+        // (common practice): under a tenth of the source ramp while the source moves, and where a
+        // step is longer than that, it moves the far end by at most a tenth of the 3.3 V swing.
         assertTrue(largest > 1.5 * STEP, "largest step " + largest);
-        assertTrue(largest <= RAMP / 10 * (1 + 1e-9), "largest step " + largest);
+        for (int i = 1; i < w.size(); i++) {
+            double dt = w.time(i) - w.time(i - 1);
+            if (w.time(i) > T0 && w.time(i - 1) < T0 + RAMP) {
+                assertTrue(dt <= RAMP / 10 * (1 + 1e-9), "step " + dt + " during the source ramp at t = " + w.time(i));
+            }
+            if (dt > RAMP / 10 * (1 + 1e-9)) {
+                double moved = Math.abs(w.value("far", i) - w.value("far", i - 1));
+                assertTrue(moved <= 3.3 / 10 + 1e-9, "step " + dt + " at t = " + w.time(i) + " moves the far end " + moved + " V");
+            }
+        }
         // lines-and-terminations.md §2, worked example 1: far-end plateaus 5.07692, 2.34320, 3.81520, 3.02258 V
         // on ((2n+1)·TD, (2n+3)·TD) after the edge; read mid-plateau, within 0.2 % of the 3.3 V swing.
         double[] far = {5.07692, 2.34320, 3.81520, 3.02258};
         for (int n = 0; n < far.length; n++) {
             double t = T0 + RAMP / 2 + (2 * n + 2) * TD;
             assertEquals(far[n], Circuits.at(w, "far", t), 0.002 * 3.3, "far end on plateau " + n);
+        }
+    }
+
+    @Test
+    void anEdgeKeepsTenStepsAtTheSourceAndWhereItArrives() {
+        // A straight ramp has no truncation error to speak of, so only the edge rule keeps the step
+        // short on it: ten steps or more per edge (common practice), while the source ramps and where
+        // the edge arrives through the line (the far end, one delay later, with every input constant).
+        double ramp = 0.4e-9;
+        Circuit c = Circuits.of(List.of(
+                Circuits.step("vs", "src", T0, ramp, 3.3),
+                new Primitive.Resistor("rs", "src", "near", 15),
+                new Primitive.LosslessLine("t1", "near", "0", "far", "0", 50, TD),
+                new Primitive.Resistor("rl", "far", "0", 1e9)),
+                new Transient(STEP, 6e-9, STEP, true), "near", "far");
+        Waveforms w = Circuits.solve(c);
+        assertTrue(largestStep(w) > ramp / 10 * (1 + 1e-9), "the step grows beyond the edge's tenth somewhere: " + largestStep(w));
+        for (int i = 1; i < w.size(); i++) {
+            double dt = w.time(i) - w.time(i - 1);
+            if (w.time(i) > T0 && w.time(i - 1) < T0 + ramp) {
+                assertTrue(dt <= ramp / 10 * (1 + 1e-9), "step " + dt + " s during the source ramp at t = " + w.time(i));
+            }
+            if (dt > ramp / 10 * (1 + 1e-9)) {
+                for (String node : new String[] {"near", "far"}) {
+                    double moved = Math.abs(w.value(node, i) - w.value(node, i - 1));
+                    assertTrue(moved <= 3.3 / 10 + 1e-9, "step " + dt + " s at t = " + w.time(i) + " moves " + node + " by " + moved + " V");
+                }
+            }
         }
     }
 
