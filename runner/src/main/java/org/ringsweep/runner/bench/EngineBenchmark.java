@@ -36,13 +36,20 @@ import org.ringsweep.runner.input.NetFileLoader;
  * <p>ngspice's time per point covers what a point costs with it: writing the deck, the process,
  * reading the raw file ({@link NgspiceEngine#run}). The built-in engine's covers
  * {@link BuiltinEngine#solve}; the sweep loop adds applying the point and elaborating the net,
- * as a sweep does. Both take the median of several runs after a warm-up, on one thread.
+ * as a sweep does. After a warm-up, on one thread, the two are measured in
+ * {@value #ROUNDS} interleaved rounds, each one ngspice run and a {@value #BUILTIN_BATCH_SECONDS} s
+ * batch of built-in runs (its mean per run), and each engine's figure is the median over the
+ * rounds: on a shared machine whose speed changes from second to second, both engines then
+ * see the same slow and fast spells, and a built-in run of a fraction of a millisecond is not
+ * timed alone.
  */
 public final class EngineBenchmark {
     /** Points of the sweep-like loop. */
     public static final int SWEEP_POINTS = 10_000;
-    private static final int NGSPICE_RUNS = 3;
-    private static final int BUILTIN_RUNS = 21;
+    /** Interleaved measuring rounds per net (one ngspice run and one built-in batch each). */
+    private static final int ROUNDS = 7;
+    /** Length of a round's batch of built-in runs (s). */
+    private static final double BUILTIN_BATCH_SECONDS = 0.05;
     private static final int BUILTIN_WARM_UP = 100;
     /**
      * The built-in engine's warm-up runs in batches of this length (s) until two batches in a row
@@ -102,7 +109,8 @@ public final class EngineBenchmark {
             if (Files.isDirectory(ibis)) {
                 nets.addAll(yamlFiles(ibis));
             }
-            StringBuilder out = new StringBuilder("engine benchmark (per point, median; ngspice = deck write + process + raw read)\n");
+            StringBuilder out = new StringBuilder("engine benchmark (per point, median of " + ROUNDS
+                    + " interleaved rounds; ngspice = deck write + process + raw read)\n");
             double sumNg = 0;
             double sumBuiltin = 0;
             double slowest = Double.POSITIVE_INFINITY;
@@ -110,9 +118,11 @@ public final class EngineBenchmark {
             for (Path file : nets) {
                 Circuit c = elaborator.elaborate(loader.load(file), "typ").circuit();
                 warmUp(() -> builtin.solve(c, Duration.ofMinutes(1))); // as the many points of a sweep give
-                double tb = medianSeconds(BUILTIN_RUNS, () -> require(builtin.solve(c, Duration.ofMinutes(1)), file));
                 Path dir = workDir.resolve("net" + index++);
-                double tn = medianSeconds(NGSPICE_RUNS, () -> require(ng.run(job(c, dir)), file));
+                double[] medians = interleavedMedians(() -> require(ng.run(job(c, dir)), file),
+                        () -> require(builtin.solve(c, Duration.ofMinutes(1)), file));
+                double tn = medians[0];
+                double tb = medians[1];
                 sumNg += tn;
                 sumBuiltin += tb;
                 slowest = Math.min(slowest, tn / tb);
@@ -204,16 +214,31 @@ public final class EngineBenchmark {
         }
     }
 
-    /** Runs once to warm up, then {@code runs} times; the median wall-clock time (s). */
-    private static double medianSeconds(int runs, Runnable r) {
-        r.run();
-        double[] t = new double[runs];
-        for (int i = 0; i < runs; i++) {
+    /**
+     * Runs {@code slow} once to warm up, then {@value #ROUNDS} rounds of one timed {@code slow}
+     * run and a {@value #BUILTIN_BATCH_SECONDS} s batch of {@code fast} runs.
+     *
+     * @return the median wall-clock time per run (s) of {@code slow} and of {@code fast}
+     */
+    private static double[] interleavedMedians(Runnable slow, Runnable fast) {
+        slow.run();
+        double[] slowTimes = new double[ROUNDS];
+        double[] fastTimes = new double[ROUNDS];
+        for (int i = 0; i < ROUNDS; i++) {
             long t0 = System.nanoTime();
-            r.run();
-            t[i] = (System.nanoTime() - t0) / 1e9;
+            slow.run();
+            slowTimes[i] = (System.nanoTime() - t0) / 1e9;
+            long f0 = System.nanoTime();
+            long end = f0 + (long) (BUILTIN_BATCH_SECONDS * 1e9);
+            int n = 0;
+            do {
+                fast.run();
+                n++;
+            } while (System.nanoTime() < end);
+            fastTimes[i] = (System.nanoTime() - f0) / 1e9 / n;
         }
-        Arrays.sort(t);
-        return t[runs / 2];
+        Arrays.sort(slowTimes);
+        Arrays.sort(fastTimes);
+        return new double[] {slowTimes[ROUNDS / 2], fastTimes[ROUNDS / 2]};
     }
 }
