@@ -689,29 +689,23 @@ final class TransientSolver {
         int highest = LEVELS_PER_OCTAVE * MAX_HALVINGS;
         if (!jump && dt > edgeCeiling * (1 + STEP_SNAP) && movedBy() > edgeMove) {
             // An edge arrived within a long step: redo it at the edge ceiling (see edgeCeiling).
-            System.arraycopy(saved, 0, x, 0, size);
             int edgeLevel = Math.min(level, 0);
             while (edgeLevel < 0 && h * LEVEL_FACTOR[-edgeLevel] > edgeCeiling) {
                 edgeLevel++;
             }
             level = Math.max(level + 1, edgeLevel);
-            quietSince = Double.NaN;
-            rejected++;
-            calm = 0;
+            reject();
             return;
         }
         if (ratio > 1 && level < highest) {
-            // Redo the step smaller: nothing of it was accepted (the state moves only in accept).
-            System.arraycopy(saved, 0, x, 0, size);
+            // Redo the step smaller.
             if (dt > edgeCeiling * (1 + STEP_SNAP)) {
                 edgeHold = EDGE_HOLD_STEPS;
             }
             if (!jump) {
                 level = Math.min(highest, level + Math.max(1, -levelsFor(ratio)));
             }
-            quietSince = Double.NaN; // not at rest after all: ordinary steps until it is again
-            rejected++;
-            calm = 0;
+            reject();
             return;
         }
         calm++;
@@ -786,6 +780,18 @@ final class TransientSolver {
             throw new SolveException(FailureKind.CONVERGENCE, "the built-in engine's Newton iteration did not converge"
                     + " at t = `" + tn + "` s (" + MAX_NEWTON + " iterations)");
         }
+    }
+
+    /**
+     * Undoes the step being judged, to be redone at the level just set: nothing of it was
+     * accepted (the state moves only in accept), and the solution is not at rest after all
+     * (ordinary steps until it is again).
+     */
+    private void reject() {
+        System.arraycopy(saved, 0, x, 0, size);
+        quietSince = Double.NaN;
+        rejected++;
+        calm = 0;
     }
 
     /** The largest change of a node voltage over the step being judged (V). */
@@ -1467,9 +1473,8 @@ final class TransientSolver {
             int[] n = line[l];
             double v1 = v(x, n[0]) - v(x, n[1]);
             double v2 = v(x, n[2]) - v(x, n[3]);
-            double theta = lineTheta(l, h);
-            double self = lineG[l] * (1 + theta * theta) / (1 - theta * theta);
-            double mutual = -2 * lineG[l] * theta / (1 - theta * theta);
+            double self = lineSelfConductance(l, h);
+            double mutual = lineMutualConductance(l, h);
             history[l].add(t, v1, self * v1 + mutual * v2 - lineIh[2 * l], v2, self * v2 + mutual * v1 - lineIh[2 * l + 1]);
         }
         for (int d = 0; d < dio.length; d++) {
@@ -1527,12 +1532,11 @@ final class TransientSolver {
                 add(a, n, br, p[2], -1);
                 add(a, n, br, p[3], 1);
             } else {
-                double theta = lineTheta(l, h);
-                double self = lineG[l] * (1 + theta * theta) / (1 - theta * theta);
+                double self = lineSelfConductance(l, h);
                 conductance(a, n, p[0], p[1], self);
                 conductance(a, n, p[2], p[3], self);
-                if (theta != 0) {
-                    double mutual = -2 * lineG[l] * theta / (1 - theta * theta);
+                double mutual = lineMutualConductance(l, h);
+                if (mutual != 0) {
                     transconductance(a, n, p[0], p[1], p[2], p[3], mutual);
                     transconductance(a, n, p[2], p[3], p[0], p[1], mutual);
                 }
@@ -1668,6 +1672,18 @@ final class TransientSolver {
     private double lineTheta(int l, double h) {
         double td = lineTd[l];
         return h > td && h <= IMPLICIT_LINE_LIMIT * td ? (h - td) / h : 0;
+    }
+
+    /** Line {@code l}'s self conductance over a step {@code h}, {@code (1 + θ²)/(1 − θ²)/Z0} (see {@link #lineTheta}). */
+    private double lineSelfConductance(int l, double h) {
+        double theta = lineTheta(l, h);
+        return lineG[l] * (1 + theta * theta) / (1 - theta * theta);
+    }
+
+    /** Line {@code l}'s mutual conductance over a step {@code h}, {@code −2θ/(1 − θ²)/Z0}; 0 within the delay (see {@link #lineTheta}). */
+    private double lineMutualConductance(int l, double h) {
+        double theta = lineTheta(l, h);
+        return -2 * lineG[l] * theta / (1 - theta * theta);
     }
 
     /** A branch current {@code br} leaving node {@code p}, entering {@code m}, with {@code v(p) − v(m)} in row br. */
